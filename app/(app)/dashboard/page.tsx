@@ -1,0 +1,75 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { PressCard } from "@/components/press/press-card";
+import { buttonClass } from "@/components/ui/button";
+import { Card, PageTitle } from "@/components/ui/card";
+import { RoleBadge } from "@/components/ui/role-badge";
+import { requireShopContext } from "@/lib/auth/current";
+import { listPresses } from "@/lib/data/presses";
+import { LIFECYCLE_LABELS } from "@/lib/press-labels";
+
+export const metadata: Metadata = { title: "Dashboard" };
+
+export default async function DashboardPage() {
+  const { user, shop } = await requireShopContext();
+  const presses = await listPresses({ userId: user.id }, shop.id);
+  const byLifecycle = Object.entries(LIFECYCLE_LABELS).map(([key, label]) => ({
+    label,
+    count: presses.filter((p) => p.lifecycle === key).length,
+  }));
+
+  return (
+    <>
+      <PageTitle
+        title={shop.name}
+        subtitle={
+          <span className="inline-flex items-center gap-2">
+            Signed in as {user.displayName} <RoleBadge role={shop.role} />
+          </span>
+        }
+        actions={
+          <Link href="/sizing" className={buttonClass("secondary")}>
+            Size a new press
+          </Link>
+        }
+      />
+      <div className="grid gap-4 lg:grid-cols-[2fr_1fr]">
+        <section aria-labelledby="presses-heading">
+          <h2 id="presses-heading" className="mb-3 text-lg font-semibold">
+            Presses
+          </h2>
+          {presses.length === 0 ? (
+            <Card>
+              <p className="text-sm text-steel-600">
+                No presses in this shop yet. Start with the sizing calculator to plan one.
+              </p>
+            </Card>
+          ) : (
+            <div className="grid gap-3 sm:grid-cols-2">
+              {presses.map((press) => (
+                <PressCard key={press.id} press={press} units={user.unitSystem} />
+              ))}
+            </div>
+          )}
+        </section>
+        <div className="flex flex-col gap-4">
+          <Card title="Shop at a glance">
+            <dl className="grid grid-cols-2 gap-3 text-sm">
+              {byLifecycle.map((row) => (
+                <div key={row.label} className="rounded-md bg-steel-50 p-3">
+                  <dt className="text-steel-600">{row.label}</dt>
+                  <dd className="font-mono text-xl font-semibold">{row.count}</dd>
+                </div>
+              ))}
+            </dl>
+          </Card>
+          <Card title="Due soon">
+            <p className="text-sm text-steel-600">
+              Service and inspection due dates appear here once a service plan and inspection cadence are set for a press.
+            </p>
+          </Card>
+        </div>
+      </div>
+    </>
+  );
+}

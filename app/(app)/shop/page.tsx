@@ -1,0 +1,44 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { buttonClass } from "@/components/ui/button";
+import { Card, PageTitle } from "@/components/ui/card";
+import { RoleBadge } from "@/components/ui/role-badge";
+import { requireShopContext } from "@/lib/auth/current";
+import { canEditShop } from "@/lib/auth/permissions";
+import { listMembers } from "@/lib/data/shops";
+
+export const metadata: Metadata = { title: "Shop" };
+
+export default async function ShopPage() {
+  const { user, shop } = await requireShopContext();
+  const members = await listMembers({ userId: user.id }, shop.id);
+  return (
+    <>
+      <PageTitle
+        title={shop.name}
+        subtitle={`${shop.personal ? "Personal shop" : "Shared shop"} · times shown in ${shop.timeZone}`}
+        actions={
+          canEditShop(shop.role) ? (
+            <Link href="/shop/settings" className={buttonClass("secondary")}>
+              Shop settings
+            </Link>
+          ) : null
+        }
+      />
+      <Card title={`Members (${members.length})`}>
+        <ul className="divide-y divide-steel-100">
+          {members.map((m) => (
+            <li key={m.userId} className="flex flex-wrap items-center justify-between gap-2 py-2">
+              <div className="min-w-0">
+                <p className="truncate font-medium">{m.displayName}</p>
+                <p className="truncate text-xs text-steel-500">{m.email}</p>
+              </div>
+              <RoleBadge role={m.role} />
+            </li>
+          ))}
+        </ul>
+        <p className="mt-3 text-xs text-steel-500">Invitations by e-mail will be sent from here.</p>
+      </Card>
+    </>
+  );
+}

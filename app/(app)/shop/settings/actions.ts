@@ -1,0 +1,43 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { z } from "zod";
+import { echoValues, type ActionState } from "@/lib/action-state";
+import { assertSameOriginAction } from "@/lib/auth/action-guard";
+import { requireShopContext } from "@/lib/auth/current";
+import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { changeMemberRole, LastManagerError, updateShop } from "@/lib/data/shops";
+import { memberRoleSchema, shopSettingsSchema } from "@/lib/validation/shop";
+
+export async function updateShopAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user, shop } = await requireShopContext();
+  const values = echoValues(form);
+  const parsed = shopSettingsSchema.safeParse({ name: form.get("name"), timeZone: form.get("timeZone") });
+  if (!parsed.success) return { ok: false, fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+  try {
+    await updateShop({ userId: user.id }, shop.id, parsed.data);
+  } catch (error) {
+    if (error instanceof ForbiddenError) return { ok: false, message: "Only a manager can change shop settings.", values };
+    throw error;
+  }
+  revalidatePath("/", "layout");
+  return { ok: true, message: "Shop settings saved.", values };
+}
+
+export async function changeRoleAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user, shop } = await requireShopContext();
+  const parsed = memberRoleSchema.safeParse({ userId: form.get("userId"), role: form.get("role") });
+  if (!parsed.success) return { ok: false, message: "Choose a valid role." };
+  try {
+    await changeMemberRole({ userId: user.id }, shop.id, parsed.data.userId, parsed.data.role);
+  } catch (error) {
+    if (error instanceof LastManagerError || error instanceof ForbiddenError || error instanceof NotFoundError) {
+      return { ok: false, message: error.message };
+    }
+    throw error;
+  }
+  revalidatePath("/shop");
+  return { ok: true, message: "Role changed." };
+}

@@ -1,0 +1,5 @@
+export * from "./auth";
+export * from "./shops";
+export * from "./presses";
+export * from "./audit";
+export * from "./rate-limits";

@@ -1,0 +1,62 @@
+/**
+ * Who may do what — the one place for role rules. The data layer (lib/data) calls these before
+ * every write and scopes every read to the acting user's shops; pages only use them to decide
+ * what to show, never as the gate.
+ */
+export type Role = "manager" | "inspector" | "member";
+
+export const ROLE_LABELS: Record<Role, string> = {
+  manager: "Manager",
+  inspector: "Inspector",
+  member: "Member",
+};
+
+/** Every action a role may or may not take inside its shop. */
+export const ACTIONS = {
+  viewShop: ["manager", "inspector", "member"],
+  editShop: ["manager"],
+  manageMembers: ["manager"],
+  viewPress: ["manager", "inspector", "member"],
+  editPress: ["manager"],
+  logService: ["manager"],
+  editServicePlan: ["manager"],
+  performInspection: ["manager", "inspector"],
+  signInspection: ["manager", "inspector"],
+  tagOutPress: ["manager", "inspector"],
+  clearTagOut: ["manager", "inspector"],
+  bookPress: ["manager", "inspector", "member"],
+  reportProblem: ["manager", "inspector", "member"],
+  closeProblem: ["manager", "inspector"],
+  attachPhoto: ["manager", "inspector", "member"],
+} as const satisfies Record<string, readonly Role[]>;
+
+export type Action = keyof typeof ACTIONS;
+
+export function can(role: Role | null | undefined, action: Action): boolean {
+  return role != null && (ACTIONS[action] as readonly Role[]).includes(role);
+}
+
+export const canEditShop = (role: Role | null): boolean => can(role, "editShop");
+export const canManageMembers = (role: Role | null): boolean => can(role, "manageMembers");
+export const canEditPress = (role: Role | null): boolean => can(role, "editPress");
+export const canSignInspection = (role: Role | null): boolean => can(role, "signInspection");
+
+/** Raised by the data layer when the actor lacks the role; pages turn it into forbidden(), APIs into 403. */
+export class ForbiddenError extends Error {
+  constructor(public readonly action: Action) {
+    super(`Your role in this shop does not allow: ${action}`);
+    this.name = "ForbiddenError";
+  }
+}
+
+/** Raised when an object does not exist or belongs to a shop the actor is not in (answered 404 either way). */
+export class NotFoundError extends Error {
+  constructor(what = "Not found") {
+    super(what);
+    this.name = "NotFoundError";
+  }
+}
+
+export function assertCan(role: Role | null | undefined, action: Action): void {
+  if (!can(role, action)) throw new ForbiddenError(action);
+}

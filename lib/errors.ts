@@ -1,0 +1,26 @@
+/** Error codes that mean "the database cannot be reached right now" rather than a bug. */
+const UNAVAILABLE_CODES = new Set([
+  "ECONNREFUSED",
+  "ECONNRESET",
+  "ETIMEDOUT",
+  "EPIPE",
+  "ENOTFOUND",
+  "PROTOCOL_CONNECTION_LOST",
+  "ER_CON_COUNT_ERROR",
+  "ER_SERVER_SHUTDOWN",
+  "ER_ACCESS_DENIED_ERROR",
+]);
+
+export function isDatabaseUnavailable(error: unknown): boolean {
+  let e: unknown = error;
+  for (let depth = 0; e && depth < 5; depth++) {
+    const code = (e as { code?: unknown }).code;
+    if (typeof code === "string" && UNAVAILABLE_CODES.has(code)) return true;
+    if (e instanceof AggregateError && e.errors.some(isDatabaseUnavailable)) return true;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
+export const DATABASE_UNAVAILABLE_MESSAGE =
+  "The database is not reachable right now. Please try again in a moment.";

@@ -1,0 +1,51 @@
+import "server-only";
+import { NextResponse, type NextRequest } from "next/server";
+import { z } from "zod";
+import { isSameOriginRequest } from "@/lib/auth/csrf";
+import { sessionCookieName } from "@/lib/auth/cookie";
+import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
+import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
+
+export function jsonError(status: number, error: string, extra?: Record<string, unknown>, init?: ResponseInit): NextResponse {
+  return NextResponse.json({ error, ...extra }, { ...init, status });
+}
+
+/** Signed-in user of an API request, from the cookie; null when absent or invalid. */
+export async function apiSession(req: NextRequest): Promise<{ session: ValidSession; user: SessionUser } | null> {
+  const token = req.cookies.get(sessionCookieName())?.value;
+  return token ? validateSessionToken(token) : null;
+}
+
+type Handler<C> = (req: NextRequest, context: C) => Promise<Response>;
+
+/**
+ * Wraps a route handler: refuses cross-site writes, and turns the data layer's errors into
+ * 404 / 403 / 400 / 503 JSON. Anything unexpected is logged and answered 500 without details.
+ */
+export function apiRoute<C>(handler: Handler<C>, options: { csrf?: boolean } = {}): Handler<C> {
+  return async (req, context) => {
+    const mutating = !["GET", "HEAD", "OPTIONS"].includes(req.method);
+    if (mutating && options.csrf !== false && !isSameOriginRequest(req.headers)) {
+      return jsonError(403, "Cross-site request refused.");
+    }
+    try {
+      return await handler(req, context);
+    } catch (error) {
+      return errorResponse(error);
+    }
+  };
+}
+
+export function errorResponse(error: unknown): NextResponse {
+  if (error instanceof NotFoundError) return jsonError(404, error.message);
+  if (error instanceof ForbiddenError) return jsonError(403, error.message);
+  if (error instanceof z.ZodError) {
+    return jsonError(400, "Invalid request.", { fieldErrors: z.flattenError(error).fieldErrors });
+  }
+  if (isDatabaseUnavailable(error)) {
+    return jsonError(503, DATABASE_UNAVAILABLE_MESSAGE, undefined, { headers: { "Retry-After": "5" } });
+  }
+  console.error("[api] unexpected error", error);
+  return jsonError(500, "Something went wrong on our side.");
+}

@@ -1,0 +1,62 @@
+/**
+ * Ram speeds, volumes and stroke times. v(mm/s) = Q(L/min) · 10⁶ / (60 · A mm²):
+ * 1 L = 10⁶ mm³ and a minute has 60 s.
+ */
+import type { PumpInput } from "./types";
+
+const MM3_PER_L = 1e6;
+const S_PER_MIN = 60;
+
+export function speedMmS(flowLpm: number, areaMm2: number): number {
+  return (flowLpm * MM3_PER_L) / (S_PER_MIN * areaMm2);
+}
+
+/** The flow that moves an area at a speed: the inverse of speedMmS. */
+export function flowLpmForSpeed(speedMmSValue: number, areaMm2: number): number {
+  return (speedMmSValue * areaMm2 * S_PER_MIN) / MM3_PER_L;
+}
+
+/** Oil swept by an area over a length (L). */
+export function sweptVolumeL(areaMm2: number, lengthMm: number): number {
+  return (areaMm2 * lengthMm) / MM3_PER_L;
+}
+
+export interface PumpFlows {
+  /** Flow while pressure is below the unloading setting (both sections of a two-stage pump). */
+  approachLpm: number;
+  /** Flow above the unloading setting (the small section alone); equals approach for a single pump. */
+  pressingLpm: number;
+}
+
+export function pumpFlows(pump: PumpInput): PumpFlows {
+  return pump.kind === "single"
+    ? { approachLpm: pump.flowLpm, pressingLpm: pump.flowLpm }
+    : { approachLpm: pump.approachFlowLpm, pressingLpm: pump.pressingFlowLpm };
+}
+
+export interface RamSpeeds {
+  advanceMmS: number;
+  pressingMmS: number;
+  /** Approach flow on the annulus: retract pressure stays below the unloading setting. */
+  retractMmS: number;
+}
+
+export function ramSpeeds(flows: PumpFlows, capMm2: number, annulusMm2: number): RamSpeeds {
+  return {
+    advanceMmS: speedMmS(flows.approachLpm, capMm2),
+    pressingMmS: speedMmS(flows.pressingLpm, capMm2),
+    retractMmS: speedMmS(flows.approachLpm, annulusMm2),
+  };
+}
+
+/**
+ * One cycle: advance at approach speed over (stroke − press distance), press over the press
+ * distance, retract at retract speed over the full stroke. Valve shift and dwell times are ignored.
+ */
+export function cycleTimeS(strokeMm: number, pressDistanceMm: number, speeds: RamSpeeds): number {
+  return (
+    (strokeMm - pressDistanceMm) / speeds.advanceMmS +
+    pressDistanceMm / speeds.pressingMmS +
+    strokeMm / speeds.retractMmS
+  );
+}

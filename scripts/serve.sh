@@ -1,0 +1,25 @@
+#!/usr/bin/env bash
+# The README's start command: from a fresh Debian machine with Node.js to the app with demo data
+# at http://127.0.0.1:3000. Safe to run again: the database is reused and the demo seeded once.
+set -euo pipefail
+ROOT="$(cd -- "$(dirname -- "${BASH_SOURCE[0]}")/.." && pwd -P)"
+cd "$ROOT"
+# shellcheck source=scripts/ensure-deps.sh
+source scripts/ensure-deps.sh
+
+ensure_node_modules "$ROOT"
+bash scripts/db.sh start
+npx tsx scripts/migrate.ts
+npx tsx db/seed.ts --quiet
+echo "Building the production app…"
+npx next build
+# Plain HTTP on loopback: the session cookie cannot be __Host-/Secure here (see lib/auth/cookie.ts).
+export NODE_ENV=production INSECURE_COOKIES="${INSECURE_COOKIES:-1}" PORT="${PORT:-3000}"
+node scripts/server.mjs &
+SERVER_PID=$!
+trap 'kill "$SERVER_PID" 2>/dev/null || true' INT TERM
+node scripts/wait-for-health.mjs "http://127.0.0.1:$PORT/api/health" 90 || { kill "$SERVER_PID" 2>/dev/null; exit 1; }
+npx tsx db/seed.ts --print-only
+echo
+echo "Presswright is running at http://127.0.0.1:$PORT  (Ctrl+C to stop; the database keeps running — npm run db:stop)"
+wait "$SERVER_PID"

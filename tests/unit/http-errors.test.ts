@@ -1,0 +1,35 @@
+import { describe, expect, it } from "vitest";
+import { z } from "zod";
+import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { errorResponse } from "@/lib/http";
+
+describe("API error answers", () => {
+  it("maps the data layer's errors to 404, 403, 400 and 503 without leaking details", async () => {
+    expect(errorResponse(new NotFoundError("Press not found")).status).toBe(404);
+    expect(errorResponse(new ForbiddenError("editPress")).status).toBe(403);
+
+    const zod = z.strictObject({ a: z.number() }).safeParse({ a: "x" });
+    const bad = errorResponse(zod.error);
+    expect(bad.status).toBe(400);
+    expect(await bad.json()).toMatchObject({ fieldErrors: { a: [expect.any(String)] } });
+
+    const down = errorResponse(Object.assign(new Error("connect ECONNREFUSED 127.0.0.1:3407"), { code: "ECONNREFUSED" }));
+    expect(down.status).toBe(503);
+    expect(down.headers.get("retry-after")).toBe("5");
+    const body = JSON.stringify(await down.json());
+    expect(body).not.toContain("3407");
+    expect(body).not.toContain("ECONNREFUSED");
+  });
+
+  it("answers anything unexpected with a bare 500", async () => {
+    const original = console.error;
+    console.error = () => {};
+    try {
+      const res = errorResponse(new Error("SELECT * FROM users WHERE secret"));
+      expect(res.status).toBe(500);
+      expect(JSON.stringify(await res.json())).not.toMatch(/SELECT|secret|at /);
+    } finally {
+      console.error = original;
+    }
+  });
+});
