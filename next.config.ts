@@ -1,4 +1,5 @@
 import type { NextConfig } from "next";
+import { isLocalUploadService, photoImagePatterns } from "./lib/uploads/hosts";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
@@ -8,6 +9,12 @@ const nextConfig: NextConfig = {
   // forbidden() and forbidden.tsx render our 403 page.
   experimental: { authInterrupts: true },
   serverExternalPackages: ["@node-rs/argon2", "mysql2"],
+  images: {
+    // Photos come from the upload service's file host only (lib/uploads/hosts.ts).
+    remotePatterns: photoImagePatterns(process.env),
+    // Next refuses loopback image hosts (an SSRF guard); the local fake is one, production never is.
+    dangerouslyAllowLocalIP: isLocalUploadService(process.env),
+  },
   async headers() {
     const https = (process.env.APP_URL ?? "").startsWith("https://");
     const common = [

@@ -1,4 +1,5 @@
 import { NextResponse, type NextRequest } from "next/server";
+import { uploadCspSources } from "@/lib/uploads/hosts";
 
 // Signed-in areas; a request without any session cookie goes straight to sign-in. This is a
 // convenience, never the gate: every page and route validates the session itself.
@@ -16,14 +17,16 @@ export function proxy(request: NextRequest): NextResponse {
 
   const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
   const dev = process.env.NODE_ENV === "development";
+  // Photos are served by, and uploaded straight from the browser to, the upload service.
+  const uploads = uploadCspSources(process.env);
   const csp = [
     "default-src 'self'",
     `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
     // Style attributes (charts, next/font) need inline styles; scripts stay nonce-only.
     "style-src 'self' 'unsafe-inline'",
-    "img-src 'self' blob: data: http://localhost:4010 https://*.ufs.sh",
+    `img-src 'self' blob: data: ${uploads.img.join(" ")}`,
     "font-src 'self'",
-    "connect-src 'self' http://localhost:4010 http://127.0.0.1:4010 https://*.ingest.uploadthing.com",
+    `connect-src 'self' ${uploads.connect.join(" ")}`,
     "object-src 'none'",
     "base-uri 'none'",
     "form-action 'self'",

@@ -35,6 +35,7 @@ export const DEMO_USERS: DemoUser[] = [
 export const WORKSHOP = {
   name: "Millrace Community Forge",
   timeZone: "Europe/London",
+  currency: "GBP",
   roles: { manager: "manager", inspector: "inspector", member1: "member", member2: "member" } as const,
 };
 

@@ -10,12 +10,33 @@ import mysql from "mysql2/promise";
 import { ARGON2_PARAMS } from "../lib/auth/password-rules";
 import { newId } from "../lib/ids";
 import { migrationDatabaseUrl } from "./config";
+import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
 import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
 import * as schema from "./schema";
 
 function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferInsert {
   const { boreMm: bore, ...rest } = p;
   return { id: newId(), shopId, ...rest, ratedForceKn: Math.round(ratedForceKn(bore, p.reliefPressureBar) * 10) / 10 };
+}
+
+type Tx = Parameters<Parameters<ReturnType<typeof drizzle<typeof schema>>["transaction"]>[0]>[0];
+
+/** A demo press with its parts and hour-meter log. */
+async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<void> {
+  const row = pressRow(shopId, p);
+  await tx.insert(schema.presses).values(row);
+  const parts = DEMO_PARTS[p.name] ?? [];
+  if (parts.length > 0) {
+    await tx.insert(schema.components).values(
+      parts.map((part) => ({ id: newId(), pressId: row.id!, ...part, kind: part.spec.kind, purchased: part.purchased ?? true })),
+    );
+  }
+  const readings = DEMO_READINGS[p.name] ?? [];
+  if (readings.length > 0) {
+    await tx.insert(schema.hourMeterReadings).values(
+      readings.map(([hours, daysAgo]) => ({ pressId: row.id!, hours, readAt: new Date(Date.now() - daysAgo * 86_400_000) })),
+    );
+  }
 }
 
 export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
@@ -29,19 +50,19 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
     const ids = Object.fromEntries(DEMO_USERS.map((u) => [u.key, newId()]));
     const workshopId = newId();
     await db.transaction(async (tx) => {
-      await tx.insert(schema.shops).values({ id: workshopId, name: WORKSHOP.name, timeZone: WORKSHOP.timeZone });
+      await tx.insert(schema.shops).values({ id: workshopId, name: WORKSHOP.name, timeZone: WORKSHOP.timeZone, currency: WORKSHOP.currency });
       for (const u of DEMO_USERS) {
         const personalId = newId();
         const activeShopId = u.key === "builder" ? personalId : workshopId;
         await tx.insert(schema.users).values({ id: ids[u.key]!, email: u.email, displayName: u.displayName, unitSystem: u.unitSystem, passwordHash, activeShopId });
         await tx.insert(schema.shops).values({ id: personalId, name: `${u.displayName}'s shop`, personal: true });
         await tx.insert(schema.memberships).values({ shopId: personalId, userId: ids[u.key]!, role: "manager" });
-        if (u.key === "builder") await tx.insert(schema.presses).values(BUILDER_PRESSES.map((p) => pressRow(personalId, p)));
+        if (u.key === "builder") for (const p of BUILDER_PRESSES) await insertPress(tx, personalId, p);
       }
       for (const [key, role] of Object.entries(WORKSHOP.roles)) {
         await tx.insert(schema.memberships).values({ shopId: workshopId, userId: ids[key]!, role });
       }
-      await tx.insert(schema.presses).values(WORKSHOP_PRESSES.map((p) => pressRow(workshopId, p)));
+      for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p);
     });
     return true;
   } finally {

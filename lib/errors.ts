@@ -24,3 +24,11 @@ export function isDatabaseUnavailable(error: unknown): boolean {
 
 export const DATABASE_UNAVAILABLE_MESSAGE =
   "The database is not reachable right now. Please try again in a moment.";
+
+/** A request that is well-formed but clashes with the record's state (answered 409). */
+export class ConflictError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "ConflictError";
+  }
+}

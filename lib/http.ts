@@ -5,7 +5,7 @@ import { isSameOriginRequest } from "@/lib/auth/csrf";
 import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
-import { DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
+import { ConflictError, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
 
 export function jsonError(status: number, error: string, extra?: Record<string, unknown>, init?: ResponseInit): NextResponse {
   return NextResponse.json({ error, ...extra }, { ...init, status });
@@ -40,6 +40,7 @@ export function apiRoute<C>(handler: Handler<C>, options: { csrf?: boolean } = {
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
+  if (error instanceof ConflictError) return jsonError(409, error.message);
   if (error instanceof z.ZodError) {
     return jsonError(400, "Invalid request.", { fieldErrors: z.flattenError(error).fieldErrors });
   }

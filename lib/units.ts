@@ -228,3 +228,14 @@ export function parseDisplayInput(kind: QuantityKind, text: string, system: Unit
   const value = parseNumberInput(text);
   return value === null ? null : fromDisplay(kind, value, system);
 }
+
+const INPUT_SIGNIFICANT = 6;
+
+/**
+ * Base-unit value → text for a form input in the system's display unit: 6 significant digits,
+ * no grouping, so it parses back (4 in ↔ 101.6 mm exactly; 2500 psi → 172.369 bar).
+ */
+export function formatInputValue(kind: QuantityKind, baseValue: number, system: UnitSystem): string {
+  const shown = toDisplay(kind, baseValue, system);
+  return Number.isFinite(shown) ? String(Number(shown.toPrecision(INPUT_SIGNIFICANT))) : "";
+}

@@ -6,9 +6,12 @@ ROOT="$(cd -- "$(dirname -- "${BASH_SOURCE[0]}")/.." && pwd -P)"
 cd "$ROOT"
 # shellcheck source=scripts/ensure-deps.sh
 source scripts/ensure-deps.sh
+# shellcheck source=scripts/local-env.sh
+source scripts/local-env.sh
 
 ensure_node_modules "$ROOT"
 bash scripts/db.sh start
+if [[ "${UPLOADTHING_LOCAL_FAKE:-}" == 1 ]]; then bash scripts/fake-uploadthing/start.sh; fi
 npx tsx scripts/migrate.ts
 npx tsx db/seed.ts --quiet
 echo "Building the production app…"

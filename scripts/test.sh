@@ -7,6 +7,8 @@ ROOT="$(cd -- "$(dirname -- "${BASH_SOURCE[0]}")/.." && pwd -P)"
 cd "$ROOT"
 # shellcheck source=scripts/ensure-deps.sh
 source scripts/ensure-deps.sh
+# shellcheck source=scripts/local-env.sh
+source scripts/local-env.sh
 
 DB_PORT="${DB_PORT:-3407}"
 TEST_PORT="${TEST_PORT:-3100}"
@@ -62,6 +64,7 @@ ensure_chromium
 mkdir -p "$RESULTS"
 rm -f "$RESULTS"/*.json
 bash scripts/db.sh start
+FAKE_UT_DIR="$ROOT/.data/uploads-test" bash scripts/fake-uploadthing/start.sh
 fresh_test_database
 
 check "typecheck" npx tsc --noEmit

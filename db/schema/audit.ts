@@ -1,6 +1,6 @@
 import { sql } from "drizzle-orm";
-import { bigint, index, json, mysqlTable, varchar } from "drizzle-orm/mysql-core";
-import { ID_LENGTH, utc } from "./columns";
+import { bigint, index, mysqlTable, varchar } from "drizzle-orm/mysql-core";
+import { ID_LENGTH, jsonColumn, utc } from "./columns";
 
 /** Append-only trail of sign-ins, denials and sign-offs; a trigger refuses UPDATE and DELETE. */
 export const auditLog = mysqlTable(
@@ -12,7 +12,7 @@ export const auditLog = mysqlTable(
     userId: varchar("user_id", { length: ID_LENGTH }),
     shopId: varchar("shop_id", { length: ID_LENGTH }),
     ip: varchar("ip", { length: 64 }),
-    detail: json("detail").$type<Record<string, string | number | boolean | null>>(),
+    detail: jsonColumn<Record<string, string | number | boolean | null>>("detail"),
   },
   (t) => [index("audit_user_idx").on(t.userId), index("audit_at_idx").on(t.at)],
 );

@@ -12,3 +12,21 @@ export const utc = (name: string) => datetime(name, { mode: "date", fsp: 3 });
 
 /** Random public ids are 24 lowercase base32 characters (see lib/ids.ts). */
 export const ID_LENGTH = 24;
+
+/**
+ * JSON column that round-trips on MariaDB: there JSON is an alias of LONGTEXT, so the driver hands
+ * back a string that Drizzle's own `json()` would leave unparsed.
+ */
+export function jsonColumn<T>(name: string) {
+  return customType<{ data: T; driverData: string | T }>({
+    dataType() {
+      return "json";
+    },
+    toDriver(value: T): string {
+      return JSON.stringify(value);
+    },
+    fromDriver(value: string | T): T {
+      return typeof value === "string" ? (JSON.parse(value) as T) : value;
+    },
+  })(name);
+}

@@ -3,3 +3,5 @@ export * from "./shops";
 export * from "./presses";
 export * from "./audit";
 export * from "./rate-limits";
+export * from "./components";
+export * from "./photos";

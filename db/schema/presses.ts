@@ -1,7 +1,7 @@
 import { sql } from "drizzle-orm";
-import { double, index, json, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { double, index, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
 import type { SizingInput } from "@/lib/hydraulics/types";
-import { ID_LENGTH, utc } from "./columns";
+import { ID_LENGTH, jsonColumn, utc } from "./columns";
 import { shops } from "./shops";
 
 export const FRAME_TYPES = ["h-frame", "c-frame", "four-post", "other"] as const;
@@ -29,7 +29,7 @@ export const presses = mysqlTable(
     location: varchar("location", { length: 100 }),
     notes: text("notes"),
     /** The sizing inputs a planned press was saved from (SI), kept so the plan can be reopened. */
-    sizingInput: json("sizing_input").$type<SizingInput>(),
+    sizingInput: jsonColumn<SizingInput>("sizing_input"),
     createdAt: utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
     updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
   },

@@ -10,6 +10,8 @@ export const shops = mysqlTable("shops", {
   name: varchar("name", { length: 100 }).notNull(),
   /** IANA zone; times are stored in UTC and shown in this zone. */
   timeZone: varchar("time_zone", { length: 64 }).notNull().default("UTC"),
+  /** ISO 4217 code for part costs. */
+  currency: varchar("currency", { length: 3 }).notNull().default("USD"),
   /** Created at sign-up for a home builder; never offered for deletion. */
   personal: boolean("personal").notNull().default(false),
   createdAt: utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),

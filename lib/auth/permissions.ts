@@ -18,6 +18,7 @@ export const ACTIONS = {
   manageMembers: ["manager"],
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
+  recordHours: ["manager", "inspector", "member"],
   logService: ["manager"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
@@ -28,6 +29,8 @@ export const ACTIONS = {
   reportProblem: ["manager", "inspector", "member"],
   closeProblem: ["manager", "inspector"],
   attachPhoto: ["manager", "inspector", "member"],
+  /** Edit or delete a photo someone else uploaded (uploaders may always change their own). */
+  editAnyPhoto: ["manager"],
 } as const satisfies Record<string, readonly Role[]>;
 
 export type Action = keyof typeof ACTIONS;
@@ -40,6 +43,8 @@ export const canEditShop = (role: Role | null): boolean => can(role, "editShop")
 export const canManageMembers = (role: Role | null): boolean => can(role, "manageMembers");
 export const canEditPress = (role: Role | null): boolean => can(role, "editPress");
 export const canSignInspection = (role: Role | null): boolean => can(role, "signInspection");
+/** Photos: the uploader (still a member who may attach photos) or a manager. */
+export const canEditPhoto = (role: Role | null, isUploader: boolean): boolean => can(role, isUploader ? "attachPhoto" : "editAnyPhoto");
 
 /** Raised by the data layer when the actor lacks the role; pages turn it into forbidden(), APIs into 403. */
 export class ForbiddenError extends Error {

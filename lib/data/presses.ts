@@ -2,8 +2,12 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, presses } from "@/db/schema";
-import { NotFoundError, type Role } from "@/lib/auth/permissions";
+import type { FRAME_TYPES } from "@/db/schema/presses";
+import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
+import { evaluateSizing, type SizingInput } from "@/lib/hydraulics";
+import { newId } from "@/lib/ids";
 import type { Actor } from "./actor";
+import { roleIn } from "./shops";
 
 export type PressSummary = {
   id: string;
@@ -48,6 +52,7 @@ export type PressDetail = PressSummary & {
   bedDepthMm: number | null;
   workingPressureBar: number | null;
   notes: string | null;
+  createdAt: Date;
   role: Role;
 };
 
@@ -63,6 +68,7 @@ export async function getPress(actor: Actor, pressId: string): Promise<PressDeta
       bedDepthMm: presses.bedDepthMm,
       workingPressureBar: presses.workingPressureBar,
       notes: presses.notes,
+      createdAt: presses.createdAt,
       role: memberships.role,
     })
     .from(presses)
@@ -71,4 +77,37 @@ export async function getPress(actor: Actor, pressId: string): Promise<PressDeta
     .limit(1);
   if (!row) throw new NotFoundError("Press not found");
   return row;
+}
+
+export type PlannedPressInput = {
+  name: string;
+  frameType: (typeof FRAME_TYPES)[number];
+  /** Validated sizing input (SI), kept on the press so the plan can be reopened. */
+  input: SizingInput;
+};
+
+/**
+ * Saves a sizing as a planned press in a shop: rated force = extend force at the relief setting,
+ * with the stroke and both pressures copied from the input. Authorization: the actor must be a
+ * member of the shop (else NotFoundError) whose role may edit presses (managers; else ForbiddenError).
+ */
+export async function createPlannedPressFromSizing(actor: Actor, shopId: string, plan: PlannedPressInput): Promise<{ id: string }> {
+  const role = await roleIn(actor, shopId);
+  if (!role) throw new NotFoundError("Shop not found");
+  assertCan(role, "editPress");
+  const result = evaluateSizing(plan.input); // throws SizingInputError for input it cannot size
+  const id = newId();
+  await db.insert(presses).values({
+    id,
+    shopId,
+    name: plan.name.trim(),
+    frameType: plan.frameType,
+    lifecycle: "planned",
+    ratedForceKn: result.reliefForceKn,
+    strokeMm: plan.input.cylinders.strokeMm,
+    workingPressureBar: plan.input.pressureBar,
+    reliefPressureBar: result.reliefBar,
+    sizingInput: plan.input,
+  });
+  return { id };
 }

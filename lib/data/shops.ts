@@ -5,12 +5,12 @@ import { memberships, shops, users } from "@/db/schema";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import type { Actor } from "./actor";
 
-export type ShopSummary = { id: string; name: string; personal: boolean; timeZone: string; role: Role };
+export type ShopSummary = { id: string; name: string; personal: boolean; timeZone: string; currency: string; role: Role };
 
 /** The shops the actor belongs to, with the actor's role in each. Authorization: own memberships only. */
 export async function listMyShops(actor: Actor): Promise<ShopSummary[]> {
   return db
-    .select({ id: shops.id, name: shops.name, personal: shops.personal, timeZone: shops.timeZone, role: memberships.role })
+    .select({ id: shops.id, name: shops.name, personal: shops.personal, timeZone: shops.timeZone, currency: shops.currency, role: memberships.role })
     .from(memberships)
     .innerJoin(shops, eq(shops.id, memberships.shopId))
     .where(eq(memberships.userId, actor.userId))

@@ -122,7 +122,7 @@ export {
   type ForceTarget,
 } from "./inverse";
 export { circleAreaMm2, annulusAreaMm2, forceKn, pressureForForceBar, areaForForceMm2, forceInTons } from "./force";
-export { speedMmS, flowLpmForSpeed, sweptVolumeL } from "./speed";
+export { speedMmS, flowLpmForSpeed, sweptVolumeL, cycleSplitS, type CycleSplit } from "./speed";
 export { hydraulicPowerKw, motorInputKw, maxPressureForMotorBar, DEFAULT_EFFICIENCY } from "./power";
 export { lineVelocityMS, lineIdForVelocityMm, LINE_RANGES_MS } from "./lines";
 export { END_FIXITY_K } from "./buckling";

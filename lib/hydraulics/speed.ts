@@ -49,14 +49,25 @@ export function ramSpeeds(flows: PumpFlows, capMm2: number, annulusMm2: number):
   };
 }
 
+export interface CycleSplit {
+  advanceS: number;
+  pressS: number;
+  retractS: number;
+}
+
 /**
  * One cycle: advance at approach speed over (stroke − press distance), press over the press
  * distance, retract at retract speed over the full stroke. Valve shift and dwell times are ignored.
  */
+export function cycleSplitS(strokeMm: number, pressDistanceMm: number, speeds: RamSpeeds): CycleSplit {
+  return {
+    advanceS: (strokeMm - pressDistanceMm) / speeds.advanceMmS,
+    pressS: pressDistanceMm / speeds.pressingMmS,
+    retractS: strokeMm / speeds.retractMmS,
+  };
+}
+
 export function cycleTimeS(strokeMm: number, pressDistanceMm: number, speeds: RamSpeeds): number {
-  return (
-    (strokeMm - pressDistanceMm) / speeds.advanceMmS +
-    pressDistanceMm / speeds.pressingMmS +
-    strokeMm / speeds.retractMmS
-  );
+  const split = cycleSplitS(strokeMm, pressDistanceMm, speeds);
+  return split.advanceS + split.pressS + split.retractS;
 }

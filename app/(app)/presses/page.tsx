@@ -1,7 +1,10 @@
 import type { Metadata } from "next";
-import { PressCard } from "@/components/press/press-card";
-import { Card, PageTitle } from "@/components/ui/card";
+import Link from "next/link";
+import { PressTable } from "@/components/press/press-table";
+import { buttonClass } from "@/components/ui/button";
+import { PageTitle } from "@/components/ui/card";
 import { requireShopContext } from "@/lib/auth/current";
+import { canEditPress } from "@/lib/auth/permissions";
 import { listPresses } from "@/lib/data/presses";
 
 export const metadata: Metadata = { title: "Presses" };
@@ -11,18 +14,18 @@ export default async function PressesPage() {
   const presses = await listPresses({ userId: user.id }, shop.id);
   return (
     <>
-      <PageTitle title="Presses" subtitle={`Every press of ${shop.name}.`} />
-      {presses.length === 0 ? (
-        <Card>
-          <p className="text-sm text-steel-600">No presses yet.</p>
-        </Card>
-      ) : (
-        <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-3">
-          {presses.map((press) => (
-            <PressCard key={press.id} press={press} units={user.unitSystem} />
-          ))}
-        </div>
-      )}
+      <PageTitle
+        title="Presses"
+        subtitle={`Every press of ${shop.name}.`}
+        actions={
+          canEditPress(shop.role) ? (
+            <Link href="/presses/new" className={buttonClass("primary")}>
+              New press
+            </Link>
+          ) : null
+        }
+      />
+      <PressTable initial={presses} units={user.unitSystem} />
     </>
   );
 }

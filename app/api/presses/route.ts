@@ -1,9 +1,13 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
+import { createPress } from "@/lib/data/press-edits";
 import { listPresses } from "@/lib/data/presses";
 import { getActiveShop } from "@/lib/data/shops";
 import { apiRoute, apiSession, jsonError } from "@/lib/http";
 import { ID_PATTERN } from "@/lib/ids";
+import { pressInputSchema } from "@/lib/validation/press";
+
+const shopIdParam = z.string().regex(ID_PATTERN, "Unknown shop id.");
 
 /** Presses of `?shopId=` (default: the user's working shop); a shop the user is not in lists nothing. */
 export const GET = apiRoute(async (req: NextRequest) => {
@@ -11,7 +15,21 @@ export const GET = apiRoute(async (req: NextRequest) => {
   if (!current) return jsonError(401, "Sign in first.");
   const actor = { userId: current.user.id };
   const requested = req.nextUrl.searchParams.get("shopId");
-  const shopId = requested ? z.string().regex(ID_PATTERN).parse(requested) : (await getActiveShop(actor, current.user.activeShopId))?.id;
+  const shopId = requested ? shopIdParam.parse(requested) : (await getActiveShop(actor, current.user.activeShopId))?.id;
   if (!shopId) return NextResponse.json({ presses: [] });
   return NextResponse.json({ presses: await listPresses(actor, shopId) });
+});
+
+/** Creates a press (SI body) in `shopId` or the working shop. Managers only. */
+export const POST = apiRoute(async (req: NextRequest) => {
+  const current = await apiSession(req);
+  if (!current) return jsonError(401, "Sign in first.");
+  const actor = { userId: current.user.id };
+  const body = z.looseObject({ shopId: shopIdParam.optional() }).parse(await req.json().catch(() => null));
+  const { shopId: requested, ...rest } = body;
+  const input = pressInputSchema.parse(rest);
+  const shopId = requested ?? (await getActiveShop(actor, current.user.activeShopId))?.id;
+  if (!shopId) return jsonError(404, "Shop not found");
+  const { id } = await createPress(actor, shopId, input);
+  return NextResponse.json({ id }, { status: 201 });
 });

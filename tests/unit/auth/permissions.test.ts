@@ -8,6 +8,7 @@ const EXPECTED: Record<Action, Role[]> = {
   manageMembers: ["manager"],
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
+  recordHours: ["manager", "inspector", "member"],
   logService: ["manager"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
@@ -18,6 +19,7 @@ const EXPECTED: Record<Action, Role[]> = {
   reportProblem: ["manager", "inspector", "member"],
   closeProblem: ["manager", "inspector"],
   attachPhoto: ["manager", "inspector", "member"],
+  editAnyPhoto: ["manager"],
 };
 
 describe("permissions", () => {

@@ -1,32 +1,84 @@
 import type { Metadata } from "next";
+import Link from "next/link";
+import { AsBuiltPanel } from "@/components/press/as-built-panel";
+import { ComponentList } from "@/components/press/component-list";
+import { PressPhotos } from "@/components/photos/press-photos";
+import { HourMeterForm } from "@/components/press/hour-meter-form";
+import { PressTimeline } from "@/components/press/press-timeline";
+import { SafetyCautions } from "@/components/sizing/safety-cautions";
+import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
+import { showQuantity as show } from "@/components/ui/quantity";
 import { orPageError, requireShopContext } from "@/lib/auth/current";
+import { canEditPress } from "@/lib/auth/permissions";
+import { listComponents } from "@/lib/data/components";
+import { listHourReadings } from "@/lib/data/press-edits";
 import { getPress } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
-import { showQuantity as show } from "@/components/ui/quantity";
+import { evaluateAsBuilt } from "@/lib/press/as-built";
+import { pressTimeline } from "@/lib/press/timeline";
+import { recordHoursAction } from "./actions";
 
 export const metadata: Metadata = { title: "Press" };
 
 export default async function PressPage({ params }: { params: Promise<{ pressId: string }> }) {
   const { pressId } = await params;
-  const { user } = await requireShopContext();
-  const press = await orPageError(getPress({ userId: user.id }, pressId));
+  const { user, shops } = await requireShopContext();
+  const actor = { userId: user.id };
+  const press = await orPageError(getPress(actor, pressId));
+  const [all, readings] = await Promise.all([listComponents(actor, pressId, { includeRemoved: true }), listHourReadings(actor, pressId)]);
+  const installed = all.filter((c) => !c.removedOn);
   const units = user.unitSystem;
+  const currency = shops.find((s) => s.id === press.shopId)?.currency ?? "USD";
+  const asBuilt = evaluateAsBuilt(press, installed, units);
+  const failing = asBuilt.checks.filter((c) => c.level === "fail");
+  const motor = installed.find((c) => c.spec.kind === "motor");
+  const canEdit = canEditPress(press.role) && press.lifecycle !== "retired";
   const rows: [string, string][] = [
     ["Frame", FRAME_TYPE_LABELS[press.frameType]],
     ["Lifecycle", LIFECYCLE_LABELS[press.lifecycle]],
-    ["Rated force", show("force", press.ratedForceKn, units)],
+    ["Rated force", press.ratedForceKn === null && asBuilt.ready ? `${show("force", asBuilt.result.reliefForceKn, units)} (as built)` : show("force", press.ratedForceKn, units)],
     ["Daylight", show("length", press.daylightMm, units)],
     ["Stroke", show("length", press.strokeMm, units)],
     ["Bed", press.bedWidthMm && press.bedDepthMm ? `${show("length", press.bedWidthMm, units)} × ${show("length", press.bedDepthMm, units)}` : "—"],
     ["Working pressure", show("pressure", press.workingPressureBar, units)],
-    ["Relief setting", show("pressure", press.reliefPressureBar, units)],
-    ["Hour meter", `${press.hourMeter.toFixed(1)} h`],
+    ["Relief setting", asBuilt.ready ? `${show("pressure", asBuilt.input.reliefBar ?? null, units)}${press.reliefPressureBar === null ? " (valve)" : ""}` : show("pressure", press.reliefPressureBar, units)],
+    ["Hour meter", `${press.hourMeter} h`],
     ["Location", press.location ?? "—"],
   ];
   return (
     <>
-      <PageTitle title={press.name} subtitle={press.notes ?? undefined} />
+      <PageTitle
+        title={press.name}
+        subtitle={press.notes ?? undefined}
+        actions={
+          <div className="flex flex-wrap gap-2">
+            {canEdit ? (
+              <>
+                <Link href={`/presses/${pressId}/components/new`} className={buttonClass("primary")}>
+                  Add a part
+                </Link>
+                <Link href={`/presses/${pressId}/edit`} className={buttonClass("secondary")}>
+                  Edit press
+                </Link>
+              </>
+            ) : null}
+            {asBuilt.ready ? (
+              <Link href={`/presses/${pressId}/gauge-card`} className={buttonClass("secondary")}>
+                Gauge card
+              </Link>
+            ) : null}
+            <Link href={`/presses/${pressId}/parts`} className={buttonClass("secondary")}>
+              Parts list
+            </Link>
+          </div>
+        }
+      />
+      {failing.length > 0 ? (
+        <p role="alert" className="mb-4 rounded-lg bg-fail-soft p-3 text-sm font-medium text-fail ring-1 ring-fail/30" data-testid="as-built-alert">
+          The as-built check fails: {failing.map((c) => c.message).join(" ")}
+        </p>
+      ) : null}
       <div className="grid gap-4 lg:grid-cols-2">
         <Card title="Overview">
           <dl className="grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
@@ -38,12 +90,30 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
             ))}
           </dl>
         </Card>
-        <Card title="Components, service log and inspections">
-          <p className="text-sm text-steel-600">
-            The component list with its history, the as-built check, the service log, inspections, photos and bookings
-            of this press will be recorded here.
-          </p>
+        <Card title="As-built check">
+          <AsBuiltPanel asBuilt={asBuilt} units={units} motorKw={motor?.spec.kind === "motor" ? motor.spec.powerKw : null} />
         </Card>
+        <div id="components" className="lg:col-span-2">
+          <Card title={`Parts (${installed.length})`}>
+            <ComponentList pressId={pressId} parts={installed} units={units} currency={currency} canEdit={canEdit} />
+          </Card>
+        </div>
+        <Card title="Hour meter">
+          <p className="mb-3 text-sm text-steel-600">Last reading {press.hourMeter} h. Readings can never go backwards.</p>
+          {press.lifecycle !== "retired" ? <HourMeterForm action={recordHoursAction.bind(null, pressId)} current={press.hourMeter} /> : null}
+        </Card>
+        <div id="history">
+          <Card title="History">
+            <PressTimeline events={pressTimeline(press.createdAt, all, readings)} />
+          </Card>
+        </div>
+        <div id="photos" className="lg:col-span-2">
+          <PressPhotos pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} />
+          <p className="mt-2 text-sm text-steel-600">The service log, inspections and bookings of this press will appear on this page as they are added to Presswright.</p>
+        </div>
+        <div className="lg:col-span-2">
+          <SafetyCautions compact />
+        </div>
       </div>
     </>
   );

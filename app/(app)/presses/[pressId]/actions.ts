@@ -1,0 +1,105 @@
+"use server";
+
+import { revalidatePath } from "next/cache";
+import { redirect } from "next/navigation";
+import type { ActionState } from "@/lib/action-state";
+import { assertSameOriginAction } from "@/lib/auth/action-guard";
+import { requireShopContext } from "@/lib/auth/current";
+import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { createComponent, deleteComponent, removeComponent, replaceComponent, updateComponent } from "@/lib/data/components";
+import { recordHourMeter } from "@/lib/data/press-edits";
+import { ConflictError } from "@/lib/errors";
+import { componentFromForm } from "@/lib/press/component-form";
+import { fieldErrorsFrom, formValues, plainNumber } from "@/lib/press/form-values";
+import { componentInputSchema, hourReadingSchema, replaceComponentSchema } from "@/lib/validation/press";
+
+/** Known refusals become a message on the form; anything else is a real error. */
+function refusal(error: unknown, values: Record<string, string>): ActionState {
+  if (error instanceof ForbiddenError) return { ok: false, message: "Your role in this shop does not allow this change.", values };
+  if (error instanceof ConflictError || error instanceof NotFoundError) return { ok: false, message: error.message, values };
+  throw error;
+}
+
+export async function addComponentAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  const parsed = componentInputSchema.safeParse(componentFromForm(values, user.unitSystem));
+  if (!parsed.success) return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsFrom(parsed.error.issues), values };
+  try {
+    await createComponent({ userId: user.id }, pressId, parsed.data);
+  } catch (error) {
+    return refusal(error, values);
+  }
+  revalidatePath(`/presses/${pressId}`);
+  redirect(`/presses/${pressId}#components`);
+}
+
+export async function editComponentAction(pressId: string, componentId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  // The hidden kind field lets the full schema check the spec; the data layer re-checks it against the stored kind.
+  const parsed = componentInputSchema.safeParse(componentFromForm(values, user.unitSystem));
+  if (!parsed.success) return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsFrom(parsed.error.issues), values };
+  const { kind: _kind, ...patch } = parsed.data;
+  try {
+    await updateComponent({ userId: user.id }, componentId, patch);
+  } catch (error) {
+    return refusal(error, values);
+  }
+  revalidatePath(`/presses/${pressId}`);
+  redirect(`/presses/${pressId}#components`);
+}
+
+export async function replaceComponentAction(pressId: string, componentId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  const outer = replaceComponentSchema.safeParse({ reason: values.reason ?? "", removedOn: values.removedOn ?? "", replacement: {} });
+  const replacement = componentInputSchema.safeParse(componentFromForm(values, user.unitSystem));
+  if (!outer.success || !replacement.success) {
+    const issues = [...(outer.error?.issues ?? []), ...(replacement.error?.issues ?? [])];
+    return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsFrom(issues), values };
+  }
+  try {
+    await replaceComponent({ userId: user.id }, componentId, { reason: outer.data.reason, removedOn: outer.data.removedOn, replacement: replacement.data });
+  } catch (error) {
+    return refusal(error, values);
+  }
+  revalidatePath(`/presses/${pressId}`);
+  redirect(`/presses/${pressId}#history`);
+}
+
+export async function removeComponentAction(pressId: string, componentId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  try {
+    if (values.mode === "delete") await deleteComponent({ userId: user.id }, componentId);
+    else {
+      const parsed = replaceComponentSchema.pick({ reason: true, removedOn: true }).safeParse({ reason: values.reason ?? "", removedOn: values.removedOn ?? "" });
+      if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsFrom(parsed.error.issues), values };
+      await removeComponent({ userId: user.id }, componentId, parsed.data);
+    }
+  } catch (error) {
+    return refusal(error, values);
+  }
+  revalidatePath(`/presses/${pressId}`);
+  redirect(`/presses/${pressId}#components`);
+}
+
+export async function recordHoursAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  const parsed = hourReadingSchema.safeParse({ hours: plainNumber(values.hours), note: values.note?.trim() || null });
+  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsFrom(parsed.error.issues), values };
+  try {
+    await recordHourMeter({ userId: user.id }, pressId, parsed.data);
+  } catch (error) {
+    return refusal(error, values);
+  }
+  revalidatePath(`/presses/${pressId}`);
+  return { ok: true, message: `Recorded ${parsed.data.hours} h.` };
+}

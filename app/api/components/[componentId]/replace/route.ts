@@ -1,0 +1,17 @@
+import { NextResponse, type NextRequest } from "next/server";
+import { replaceComponent } from "@/lib/data/components";
+import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { componentInputSchema, replaceComponentSchema } from "@/lib/validation/press";
+
+type Context = { params: Promise<{ componentId: string }> };
+
+/** Replaces a part in one transaction; the old one stays in the history. Managers only. */
+export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
+  const current = await apiSession(req);
+  if (!current) return jsonError(401, "Sign in first.");
+  const { componentId } = await params;
+  const body = replaceComponentSchema.parse(await req.json().catch(() => null));
+  const replacement = componentInputSchema.parse(body.replacement);
+  const { id } = await replaceComponent({ userId: current.user.id }, componentId, { ...body, replacement });
+  return NextResponse.json({ id }, { status: 201 });
+});

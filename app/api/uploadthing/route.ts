@@ -1,0 +1,23 @@
+import type { NextRequest } from "next/server";
+import { createRouteHandler } from "uploadthing/next";
+import { isSameOriginRequest } from "@/lib/auth/csrf";
+import { jsonError } from "@/lib/http";
+import { uploadRouter } from "./core";
+
+const handlers = createRouteHandler({ router: uploadRouter });
+
+/** The routes' public config (types, limits), read by the upload hook. */
+export const GET = handlers.GET;
+
+/**
+ * Upload requests from our pages must be same-origin. The upload service's callbacks come
+ * server-to-server without Origin; they carry `uploadthing-hook` and the SDK refuses any whose
+ * signature does not verify, so they pass straight to it. A browser cannot add that header to a
+ * cross-site request without a CORS preflight, which this route never grants.
+ */
+export async function POST(req: NextRequest): Promise<Response> {
+  if (!req.headers.has("uploadthing-hook") && !isSameOriginRequest(req.headers)) {
+    return jsonError(403, "Cross-site request refused.");
+  }
+  return handlers.POST(req);
+}

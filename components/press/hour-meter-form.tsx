@@ -1,0 +1,25 @@
+"use client";
+
+import { useActionState } from "react";
+import { Button } from "@/components/ui/button";
+import { Field } from "@/components/ui/field";
+import { FormMessage } from "@/components/ui/form-message";
+import { initialActionState, type ActionState } from "@/lib/action-state";
+
+type Props = { action: (state: ActionState, form: FormData) => Promise<ActionState>; current: number };
+
+export function HourMeterForm({ action, current }: Props) {
+  const [state, formAction, pending] = useActionState(action, initialActionState);
+  return (
+    <form action={formAction} className="flex flex-col gap-3" noValidate>
+      <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
+      <div className="flex flex-wrap items-end gap-3">
+        <Field name="hours" label="Reading now (h)" inputMode="decimal" required placeholder={String(current)} defaultValue={state.ok ? "" : state.values?.hours} errors={state.fieldErrors?.hours} className="w-40" />
+        <Field name="note" label="Note — optional" maxLength={255} defaultValue={state.ok ? "" : state.values?.note} errors={state.fieldErrors?.note} className="min-w-0 flex-1" />
+        <Button type="submit" variant="secondary" disabled={pending}>
+          Record
+        </Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,170 @@
+import "server-only";
+import { and, desc, eq } from "drizzle-orm";
+import { db } from "@/db/client";
+import { components, photos, users } from "@/db/schema";
+import { canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import type { PhotoKind } from "@/lib/photos/kinds";
+import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
+import type { PhotoPatch } from "@/lib/validation/photo";
+import type { Actor } from "./actor";
+import { assertNotRetired, pressAccess, type Executor } from "./press-access";
+
+/** What the gallery shows of a photo: no storage keys, the uploader by name. */
+export type PhotoView = {
+  id: string;
+  pressId: string;
+  componentId: string | null;
+  componentLabel: string | null;
+  kind: PhotoKind;
+  caption: string | null;
+  uploadedBy: string | null;
+  uploaderName: string | null;
+  url: string;
+  width: number;
+  height: number;
+  thumbUrl: string;
+  thumbWidth: number;
+  thumbHeight: number;
+  createdAt: Date;
+};
+
+/** The record a photo is attached to, after the server checked it. */
+export type PhotoTarget = { pressId: string; componentId: string | null };
+export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
+export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
+
+const viewColumns = {
+  id: photos.id,
+  pressId: photos.pressId,
+  componentId: photos.componentId,
+  componentLabel: components.label,
+  kind: photos.kind,
+  caption: photos.caption,
+  uploadedBy: photos.uploadedBy,
+  uploaderName: users.displayName,
+  url: photos.fileUrl,
+  width: photos.width,
+  height: photos.height,
+  thumbUrl: photos.thumbUrl,
+  thumbWidth: photos.thumbWidth,
+  thumbHeight: photos.thumbHeight,
+  createdAt: photos.createdAt,
+};
+
+function selectViews() {
+  return db
+    .select(viewColumns)
+    .from(photos)
+    .leftJoin(users, eq(users.id, photos.uploadedBy))
+    .leftJoin(components, eq(components.id, photos.componentId))
+    .$dynamic();
+}
+
+/**
+ * Checks that the actor may attach photos to this press (and part) and returns the target.
+ * Authorization: members of the press's shop with `attachPhoto` (another shop's press, or a part
+ * of another press: NotFoundError). A retired press is a closed record and takes no new photos.
+ */
+export async function authorizePhotoTarget(
+  actor: Actor,
+  target: { pressId: string; componentId?: string | null },
+  executor: Executor = db,
+): Promise<PhotoTarget> {
+  const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
+  assertNotRetired(access);
+  const componentId = target.componentId ?? null;
+  if (componentId) {
+    const [part] = await executor
+      .select({ id: components.id })
+      .from(components)
+      .where(and(eq(components.id, componentId), eq(components.pressId, target.pressId)))
+      .limit(1);
+    if (!part) throw new NotFoundError("Part not found on this press");
+  }
+  return { pressId: target.pressId, componentId };
+}
+
+/**
+ * Records a processed photo whose files are already stored. Authorization: as
+ * `authorizePhotoTarget`, checked again here because access may have changed since the upload began.
+ */
+export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo: NewPhoto): Promise<{ id: string }> {
+  await db.transaction(async (tx) => {
+    await authorizePhotoTarget(actor, target, tx);
+    await tx.insert(photos).values({
+      id: photo.id,
+      pressId: target.pressId,
+      componentId: target.componentId,
+      kind: photo.kind,
+      caption: photo.caption,
+      uploadedBy: actor.userId,
+      fileKey: photo.full.key,
+      fileUrl: photo.full.url,
+      width: photo.full.width,
+      height: photo.full.height,
+      bytes: photo.full.bytes,
+      thumbKey: photo.thumb.key,
+      thumbUrl: photo.thumb.url,
+      thumbWidth: photo.thumb.width,
+      thumbHeight: photo.thumb.height,
+      thumbBytes: photo.thumb.bytes,
+    });
+  });
+  return { id: photo.id };
+}
+
+/** A press's photos, newest first, optionally of one kind. Authorization: members of its shop. */
+export async function listPressPhotos(actor: Actor, pressId: string, options: { kind?: PhotoKind } = {}): Promise<PhotoView[]> {
+  await pressAccess(db, actor, pressId, "viewPress");
+  return selectViews()
+    .where(and(eq(photos.pressId, pressId), options.kind ? eq(photos.kind, options.kind) : undefined))
+    .orderBy(desc(photos.createdAt), desc(photos.id));
+}
+
+/** One photo. Authorization: members of its press's shop; anyone else gets NotFoundError. */
+export async function getPhoto(actor: Actor, photoId: string): Promise<PhotoView> {
+  const [view] = await selectViews().where(eq(photos.id, photoId)).limit(1);
+  if (!view) throw new NotFoundError("Photo not found");
+  await pressAccess(db, actor, view.pressId, "viewPress");
+  return view;
+}
+
+/** The photo's press, storage keys and whether the actor may change it (uploader or manager). */
+async function photoForChange(executor: Executor, actor: Actor, photoId: string) {
+  const [row] = await executor
+    .select({ pressId: photos.pressId, uploadedBy: photos.uploadedBy, fileKey: photos.fileKey, thumbKey: photos.thumbKey })
+    .from(photos)
+    .where(eq(photos.id, photoId))
+    .limit(1);
+  if (!row) throw new NotFoundError("Photo not found");
+  // Another shop's photo reads as not-found, before any role question.
+  const access = await pressAccess(executor, actor, row.pressId, "viewPress");
+  const isUploader = row.uploadedBy === actor.userId;
+  if (!canEditPhoto(access.role, isUploader)) throw new ForbiddenError(isUploader ? "attachPhoto" : "editAnyPhoto");
+  return { row, access };
+}
+
+/**
+ * Changes a photo's caption or kind. Authorization: its uploader or a manager of its shop
+ * (another shop: NotFoundError; other members: ForbiddenError); not on a retired press.
+ */
+export async function updatePhoto(actor: Actor, photoId: string, patch: PhotoPatch): Promise<PhotoView> {
+  await db.transaction(async (tx) => {
+    const { access } = await photoForChange(tx, actor, photoId);
+    assertNotRetired(access);
+    await tx.update(photos).set(patch).where(eq(photos.id, photoId));
+  });
+  return getPhoto(actor, photoId);
+}
+
+/**
+ * Deletes a photo: its stored files through the upload service first, then the row, so a failed
+ * storage call leaves the photo listed and the delete can be retried. Authorization: its uploader
+ * or a manager of its shop (another shop: NotFoundError; other members: ForbiddenError). Allowed on
+ * retired presses too: an uploader can always take back a picture they shared.
+ */
+export async function deletePhoto(actor: Actor, photoId: string): Promise<void> {
+  const { row } = await photoForChange(db, actor, photoId);
+  await deleteStoredFiles([row.fileKey, row.thumbKey]);
+  await db.delete(photos).where(eq(photos.id, photoId));
+}

@@ -1,0 +1,34 @@
+/** One chronological history of a press, built from its parts and hour-meter log. Pure. */
+export type TimelineEvent = {
+  /** ISO date (YYYY-MM-DD) the event happened. */
+  on: string;
+  kind: "installed" | "removed" | "replaced" | "hours" | "created";
+  title: string;
+  detail?: string;
+};
+
+type Part = { id: string; label: string; installedOn: string | null; removedOn: string | null; removalReason: string | null; replacedById: string | null };
+type Reading = { hours: number; readAt: Date; note: string | null };
+
+export function pressTimeline(created: Date, parts: Part[], readings: Reading[]): TimelineEvent[] {
+  const byId = new Map(parts.map((p) => [p.id, p]));
+  const events: TimelineEvent[] = [{ on: created.toISOString().slice(0, 10), kind: "created", title: "Press record created" }];
+  for (const part of parts) {
+    if (part.installedOn) events.push({ on: part.installedOn, kind: "installed", title: `${part.label} installed` });
+    if (part.removedOn) {
+      const successor = part.replacedById ? byId.get(part.replacedById) : undefined;
+      events.push({
+        on: part.removedOn,
+        kind: successor ? "replaced" : "removed",
+        title: successor ? `${part.label} replaced by ${successor.label}` : `${part.label} removed`,
+        detail: part.removalReason ?? undefined,
+      });
+    }
+  }
+  for (const r of readings) {
+    events.push({ on: r.readAt.toISOString().slice(0, 10), kind: "hours", title: `Hour meter read ${r.hours} h`, detail: r.note ?? undefined });
+  }
+  // Newest first; on the same day a removal reads before the installation of its successor.
+  const order = { created: 0, installed: 1, hours: 2, removed: 3, replaced: 3 } as const;
+  return events.sort((a, b) => (a.on === b.on ? order[b.kind] - order[a.kind] : b.on.localeCompare(a.on)));
+}
