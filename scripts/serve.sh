@@ -14,6 +14,7 @@ bash scripts/db.sh start
 if [[ "${UPLOADTHING_LOCAL_FAKE:-}" == 1 ]]; then bash scripts/fake-uploadthing/start.sh; fi
 npx tsx scripts/migrate.ts
 npx tsx db/seed.ts --quiet
+export NEXT_TELEMETRY_DISABLED=1
 echo "Building the production app…"
 npx next build
 # Plain HTTP on loopback: the session cookie cannot be __Host-/Secure here (see lib/auth/cookie.ts).
