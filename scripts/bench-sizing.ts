@@ -3,23 +3,10 @@
  * Run with `npx tsx scripts/bench-sizing.ts`. Target < 0.1 ms. Prints figures; asserts nothing.
  */
 import { performance } from "node:perf_hooks";
-import { evaluateSizing, type SizingInput } from "@/lib/hydraulics";
+import { evaluateSizing } from "@/lib/hydraulics";
+import { FULL_SIZING_INPUT } from "../tests/fixtures/sizing-inputs";
 
-const FULL_INPUT: SizingInput = {
-  cylinders: { count: 2, boreMm: 100, rodMm: 56, strokeMm: 250 },
-  pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 40 },
-  overallEfficiency: 0.85,
-  pressureBar: 200,
-  reliefBar: 210,
-  motorKw: 5.5,
-  pressDistanceMm: 40,
-  lines: { suctionIdMm: 32, pressureIdMm: 13, returnIdMm: 19 },
-  buckling: { endFixity: "fixed-pinned", exposedRodMm: 120, rodYieldMpa: 355 },
-  ratings: { hoseBar: 275, valveBar: 315, pumpBar: 250, cylinderBar: 250, gaugeBar: 400 },
-  reservoir: { volumeL: 150 },
-  plate: { role: "crosshead", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "S355JR" },
-  columns: { count: 4, diameterMm: 40, grade: "S355JR" },
-};
+const FULL_INPUT = FULL_SIZING_INPUT;
 
 const WARM_UP = 20_000;
 const SAMPLES = 200;

@@ -109,9 +109,11 @@ export function PhotoUploader({ target, parts = [], onUploaded }: Props) {
           Choose photos…
         </Button>
         {/* Only on touch devices, where capture opens the rear camera; elsewhere it would be a second file picker. */}
-        <Button type="button" variant="secondary" disabled={isUploading} onClick={() => cameraRef.current?.click()} className="hidden pointer-coarse:inline-flex">
-          Take a photo
-        </Button>
+        <span className="hidden pointer-coarse:contents">
+          <Button type="button" variant="secondary" disabled={isUploading} onClick={() => cameraRef.current?.click()}>
+            Take a photo
+          </Button>
+        </span>
         <Button type="button" disabled={files.length === 0 || isUploading} onClick={() => void upload()}>
           {isUploading ? `Uploading… ${progress} %` : files.length > 1 ? `Upload ${files.length} photos` : "Upload photo"}
         </Button>

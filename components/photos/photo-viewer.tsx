@@ -70,7 +70,15 @@ function PhotoDetails({ photo, canChange, onClose, onChanged }: Props & { photo:
         </Button>
       </header>
       <div className="flex justify-center bg-steel-900">
-        <Image src={photo.url} alt={title} width={photo.width} height={photo.height} sizes="(max-width: 896px) 100vw, 896px" className="max-h-[65dvh] w-auto object-contain" />
+        <Image
+          src={photo.url}
+          alt={title}
+          width={photo.width}
+          height={photo.height}
+          sizes="(max-width: 896px) 100vw, 896px"
+          loading="eager"
+          className="h-auto max-h-[65dvh] w-full object-contain"
+        />
       </div>
       <div className="flex flex-col gap-3 p-4">
         <FormMessage message={error} />

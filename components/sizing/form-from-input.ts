@@ -37,6 +37,7 @@ export function formFromInput(input: SizingInput, system: UnitSystem): FormState
   }
   return {
     system,
+    pristine: false,
     values,
     blocks,
     choices: {

@@ -5,6 +5,7 @@
  */
 import type { EndFixity, SteelGrade } from "@/lib/hydraulics/types";
 import { formatInputValue, parseDisplayInput, parseNumberInput, type QuantityKind, type UnitSystem } from "@/lib/units";
+import { IMPERIAL_DEFAULTS } from "./imperial-defaults";
 
 export type FieldKind = QuantityKind | "count" | "percent";
 export type BlockId = "lines" | "buckling" | "ratings" | "reservoir" | "plate" | "columns";
@@ -56,6 +57,7 @@ export const FIELDS = {
 export type FieldId = keyof typeof FIELDS;
 export const FIELD_IDS = Object.keys(FIELDS) as FieldId[];
 
+
 export interface Choices {
   pumpKind: "single" | "two-stage";
   endFixity: EndFixity;
@@ -70,6 +72,8 @@ export interface FormState {
   values: Record<FieldId, string>;
   choices: Choices;
   blocks: Record<BlockId, boolean>;
+  /** Nothing typed or switched yet: a first unit change may bring that system's own defaults. */
+  pristine: boolean;
   /** What was typed before the last unit switch, to give it back unchanged on switching back. */
   beforeSwitch?: { system: UnitSystem; typed: Record<FieldId, string>; converted: Record<FieldId, string> };
 }
@@ -95,11 +99,21 @@ export function fromText(field: FieldDef, text: string, system: UnitSystem): num
 
 export function defaultForm(system: UnitSystem): FormState {
   const values = {} as Record<FieldId, string>;
-  for (const id of FIELD_IDS) values[id] = toText(FIELDS[id], FIELDS[id].initial, system);
+  for (const id of FIELD_IDS) {
+    const own = system === "imperial" ? IMPERIAL_DEFAULTS[id] : undefined;
+    values[id] = own !== undefined ? String(own) : toText(FIELDS[id], FIELDS[id].initial, system);
+  }
   return {
     system,
+    pristine: true,
     values,
-    choices: { pumpKind: "two-stage", endFixity: "fixed-pinned", plateRole: "crosshead", plateGrade: "S355JR", columnsGrade: "S355JR" },
+    choices: {
+      pumpKind: "two-stage",
+      endFixity: "fixed-pinned",
+      plateRole: "crosshead",
+      plateGrade: system === "imperial" ? "A36" : "S355JR",
+      columnsGrade: system === "imperial" ? "A36" : "S355JR",
+    },
     blocks: { lines: true, buckling: true, ratings: true, reservoir: true, plate: true, columns: false },
   };
 }
@@ -121,14 +135,14 @@ export function convertForm(form: FormState, to: UnitSystem): FormState {
     const si = fromText(FIELDS[id], form.values[id], form.system);
     if (si !== undefined && Number.isFinite(si)) values[id] = toText(FIELDS[id], si, to);
   }
-  return { ...form, system: to, values, beforeSwitch: { system: form.system, typed: form.values, converted: values } };
+  return { ...form, system: to, pristine: false, values, beforeSwitch: { system: form.system, typed: form.values, converted: values } };
 }
 
 /** Sets fields from SI values (e.g. a bore chosen in the inverse mode). */
 export function applySi(form: FormState, si: Partial<Record<FieldId, number>>): FormState {
   const values = { ...form.values };
   for (const [id, value] of Object.entries(si) as [FieldId, number][]) values[id] = toText(FIELDS[id], value, form.system);
-  return { ...form, values };
+  return { ...form, pristine: false, values };
 }
 
 /**

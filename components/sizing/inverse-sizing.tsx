@@ -20,6 +20,8 @@ const FORCE_UNITS: Record<ForceUnit, string> = { kN: "kN", tf: "t(f), metric ton
 
 interface State {
   system: UnitSystem;
+  /** Untouched: a unit switch brings that system's own round question. */
+  pristine: boolean;
   force: string;
   forceUnit: ForceUnit;
   pressure: string;
@@ -36,18 +38,21 @@ export interface BorePick {
 }
 
 function initial(system: UnitSystem): State {
-  // "What bore do I need for 30 t at 200 bar?" with a brisk 50 mm/s approach.
+  // "What bore do I need for 30 t at 200 bar?" (or 30 US tons at 3000 psi), with a brisk approach.
+  const metric = system === "metric";
   return {
     system,
+    pristine: true,
     force: "30",
-    forceUnit: system === "metric" ? "tf" : "shortTon",
-    pressure: formatInputValue("pressure", 200, system),
+    forceUnit: metric ? "tf" : "shortTon",
+    pressure: metric ? "200" : "3000",
     count: "1",
-    speed: formatInputValue("speed", 50, system),
+    speed: metric ? "50" : "2",
   };
 }
 
 function convert(state: State, to: UnitSystem): State {
+  if (state.pristine) return initial(to);
   const re = (kind: "pressure" | "speed", text: string): string => {
     const si = parseDisplayInput(kind, text, state.system);
     return si === null ? text : formatInputValue(kind, si, to);
@@ -62,7 +67,7 @@ export function InverseSizing({ system, onUse }: { system: UnitSystem; onUse: (p
   const [state, setState] = useState(() => initial(system));
   // Follow a unit switch by rewriting what was typed (React's "adjust state while rendering").
   if (state.system !== system) setState(convert(state, system));
-  const set = (patch: Partial<State>) => setState((s) => ({ ...s, ...patch }));
+  const set = (patch: Partial<State>) => setState((s) => ({ ...s, ...patch, pristine: false }));
 
   const forceValue = parseNumberInput(state.force);
   const forceKn = forceValue !== null && forceValue > 0 ? toBase("force", forceValue, state.forceUnit) : null;
@@ -124,10 +129,10 @@ export function InverseSizing({ system, onUse }: { system: UnitSystem; onUse: (p
             {count !== null && count > 1 ? ` each, for ${count} cylinders` : ""}
           </p>
           <ul className="mt-3 flex flex-col gap-2">
-            {option(suggestion.metric.atOrAbove, "meets the target")}
-            {option(suggestion.metric.below, "falls short")}
-            {option(suggestion.inch.atOrAbove, "meets the target")}
-            {option(suggestion.inch.below, "falls short")}
+            {(system === "metric" ? [suggestion.metric, suggestion.inch] : [suggestion.inch, suggestion.metric]).flatMap((series) => [
+              option(series.atOrAbove, "meets the target"),
+              option(series.below, "falls short"),
+            ])}
           </ul>
           <p className="mt-3 text-xs text-steel-600">
             Standard bores: the ISO 3320 metric series and common inch sizes of tie-rod and welded cylinders (both from memory; check the maker&apos;s list).

@@ -31,11 +31,11 @@ type Evaluation = { input: SizingInput; result: SizingResult };
 function reduce(form: FormState, action: FormAction): FormState {
   switch (action.type) {
     case "value":
-      return { ...form, values: { ...form.values, [action.id]: action.text } };
+      return { ...form, pristine: false, values: { ...form.values, [action.id]: action.text } };
     case "choice":
-      return { ...form, choices: { ...form.choices, ...action.choice } };
+      return { ...form, pristine: false, choices: { ...form.choices, ...action.choice } };
     case "block":
-      return { ...form, blocks: { ...form.blocks, [action.id]: action.on } };
+      return { ...form, pristine: false, blocks: { ...form.blocks, [action.id]: action.on } };
   }
 }
 
@@ -64,7 +64,8 @@ export function SizingCalculator({
     initial ? formFromInput(initial.input, accountSystem ?? "metric") : defaultForm(accountSystem ?? "metric"),
   );
   // A unit switch rewrites what was typed in the new units (React's "adjust state while rendering").
-  if (form.system !== system) setForm(convertForm(form, system));
+  // The remembered system arriving after hydration finds the form untouched: use its own defaults.
+  if (form.system !== system) setForm(form.pristine ? defaultForm(system) : convertForm(form, system));
   const [mode, setMode] = useState<"design" | "inverse">("design");
   const [name, setName] = useState(initial?.name ?? "");
 
@@ -103,7 +104,14 @@ export function SizingCalculator({
           {tab("design", "Check a design")}
           {tab("inverse", "Find a bore")}
         </div>
-        <UnitSwitch value={system} onChange={setSystem} />
+        <UnitSwitch
+          value={system}
+          onChange={(next) => {
+            // A switch by hand converts the same press; it never swaps in other defaults.
+            setForm((f) => ({ ...f, pristine: false }));
+            setSystem(next);
+          }}
+        />
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,5fr)_minmax(0,7fr)]">
         <div className="min-w-0">

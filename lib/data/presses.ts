@@ -1,11 +1,12 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { memberships, presses } from "@/db/schema";
+import { components, memberships, presses } from "@/db/schema";
 import type { FRAME_TYPES } from "@/db/schema/presses";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import { evaluateSizing, type SizingInput } from "@/lib/hydraulics";
 import { newId } from "@/lib/ids";
+import { componentsFromSizing } from "@/lib/press/from-sizing";
 import type { Actor } from "./actor";
 import { roleIn } from "./shops";
 
@@ -97,17 +98,22 @@ export async function createPlannedPressFromSizing(actor: Actor, shopId: string,
   assertCan(role, "editPress");
   const result = evaluateSizing(plan.input); // throws SizingInputError for input it cannot size
   const id = newId();
-  await db.insert(presses).values({
-    id,
-    shopId,
-    name: plan.name.trim(),
-    frameType: plan.frameType,
-    lifecycle: "planned",
-    ratedForceKn: result.reliefForceKn,
-    strokeMm: plan.input.cylinders.strokeMm,
-    workingPressureBar: plan.input.pressureBar,
-    reliefPressureBar: result.reliefBar,
-    sizingInput: plan.input,
+  await db.transaction(async (tx) => {
+    await tx.insert(presses).values({
+      id,
+      shopId,
+      name: plan.name.trim(),
+      frameType: plan.frameType,
+      lifecycle: "planned",
+      ratedForceKn: result.reliefForceKn,
+      strokeMm: plan.input.cylinders.strokeMm,
+      workingPressureBar: plan.input.pressureBar,
+      reliefPressureBar: result.reliefBar,
+      sizingInput: plan.input,
+    });
+    // The plan's parts become the press's components (not yet bought), so the parts list starts filled in.
+    const parts = componentsFromSizing(plan.input);
+    if (parts.length > 0) await tx.insert(components).values(parts.map((part) => ({ id: newId(), pressId: id, ...part, purchased: false })));
   });
   return { id };
 }

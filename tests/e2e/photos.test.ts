@@ -1,8 +1,8 @@
 import sharp from "sharp";
-import type { Browser, Page } from "playwright-core";
+import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GPS_EXIF, noisyJpeg } from "../fixtures/images";
-import { launchBrowser, newPage, screenshot, signIn } from "./browser";
+import { SCREENSHOT_DIR, launchBrowser, newPage, screenshot, signIn } from "./browser";
 
 type ApiPhoto = { id: string; caption: string | null; url: string; thumbUrl: string };
 
@@ -22,8 +22,7 @@ async function openDemoPress(page: Page): Promise<string> {
 }
 
 /** Waits until the image has actually been decoded (served through next/image from the file host). */
-async function expectLoaded(page: Page, alt: string): Promise<void> {
-  const image = page.getByAltText(alt).first();
+async function expectLoaded(page: Page, image: Locator): Promise<void> {
   await image.waitFor();
   await page.waitForFunction((el) => el instanceof HTMLImageElement && el.complete && el.naturalWidth > 0, await image.elementHandle(), { timeout: 15_000 });
 }
@@ -42,7 +41,7 @@ describe("photos", () => {
     await page.getByLabel("Choose photos").setInputFiles({ name: "IMG_2041.jpg", mimeType: "image/jpeg", buffer: await noisyJpeg(1600, 1200, GPS_EXIF) });
     await uploader.getByRole("button", { name: "Upload photo" }).click();
     await page.getByText("1 photo added.").waitFor({ timeout: 30_000 });
-    await expectLoaded(page, caption);
+    await expectLoaded(page, page.getByTestId("photo-gallery").getByAltText(caption));
     await page.locator("#photos").scrollIntoViewIfNeeded();
     await screenshot(page, "photos-press-1280");
 
@@ -56,8 +55,8 @@ describe("photos", () => {
     await page.getByRole("button", { name: `Open photo: ${caption}` }).click();
     const dialog = page.getByRole("dialog");
     await dialog.waitFor();
-    await expectLoaded(page, caption);
-    await screenshot(page, "photos-viewer-1280");
+    await expectLoaded(page, dialog.getByAltText(caption));
+    await page.screenshot({ path: `${SCREENSHOT_DIR}photos-viewer-1280.png` });
     await dialog.getByRole("button", { name: "Close" }).click();
 
     // A member of another shop: the photo's API and the press page are 404 for them.
@@ -73,15 +72,19 @@ describe("photos", () => {
     const phone = await newPage(browser, 390, 844);
     await signIn(phone.page, "dana@millrace-forge.example");
     await phone.page.goto(`${pressUrl}#photos`);
-    await expectLoaded(phone.page, caption);
+    await expectLoaded(phone.page, phone.page.getByTestId("photo-gallery").getByAltText(caption));
     await phone.page.locator("#photos").scrollIntoViewIfNeeded();
     await screenshot(phone.page, "photos-press-390");
+    await phone.page.getByRole("button", { name: `Open photo: ${caption}` }).click();
+    await expectLoaded(phone.page, phone.page.getByRole("dialog").getByAltText(caption));
+    await phone.page.screenshot({ path: `${SCREENSHOT_DIR}photos-viewer-390.png` });
     await phone.context.close();
 
     await page.getByRole("button", { name: `Open photo: ${caption}` }).click();
     await dialog.getByRole("button", { name: "Delete…" }).click();
     await dialog.getByRole("button", { name: "Delete photo" }).click();
-    await page.getByAltText(caption).waitFor({ state: "detached" });
+    await dialog.waitFor({ state: "hidden" });
+    await page.getByRole("button", { name: `Open photo: ${caption}` }).waitFor({ state: "detached" });
     expect((await fetch(photo.url)).status).toBe(404);
     expect((await page.request.get(`/api/photos/${photo.id}`)).status()).toBe(404);
     await context.close();

@@ -113,8 +113,10 @@ describe("saving a planned press", () => {
     await expect.poll(() => page.getByText("Planned", { exact: true }).first().isVisible()).toBe(true);
     // Rated force is the force at the 210 bar relief on a 140 mm bore: 323.3 kN (computed from formula)
     expect(await page.getByText("323 kN").first().isVisible()).toBe(true);
+    // The sizing's parts came along as components of the planned press.
+    expect(await page.getByTestId("component-list").textContent()).toContain("Bore 140 mm");
     await page.goto("/dashboard");
-    expect(await page.getByText(name).isVisible()).toBe(true);
+    await page.getByText(name).first().waitFor();
     await context.close();
   });
 

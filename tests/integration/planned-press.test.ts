@@ -3,7 +3,9 @@ import { beforeAll, describe, expect, it } from "vitest";
 import { db } from "@/db/client";
 import { memberships, presses } from "@/db/schema";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { listComponents } from "@/lib/data/components";
 import { createPlannedPressFromSizing, getPress, listPresses } from "@/lib/data/presses";
+import { evaluateAsBuilt } from "@/lib/press/as-built";
 import { SizingInputError, type SizingInput } from "@/lib/hydraulics";
 import { makeUser } from "./helpers";
 
@@ -40,6 +42,12 @@ describe("createPlannedPressFromSizing", () => {
     expect(press.reliefPressureBar).toBe(210);
     const [row] = await db.select({ sizingInput: presses.sizingInput }).from(presses).where(eq(presses.id, id));
     expect(row?.sizingInput).toEqual(INPUT);
+    // The sizing's parts became components of the plan, none bought yet, and the as-built check agrees.
+    const parts = await listComponents({ userId: manager.userId }, id);
+    expect(parts.map((p) => p.kind)).toEqual(expect.arrayContaining(["cylinder", "pump", "relief-valve"]));
+    expect(parts.every((p) => !p.purchased)).toBe(true);
+    const asBuilt = evaluateAsBuilt(press, parts, "metric");
+    expect(asBuilt.ready && asBuilt.result.reliefForceKn).toBeCloseTo(257.709, 2);
     // The dashboard's list shows it too (planned presses included).
     expect((await listPresses({ userId: member.userId }, manager.shopId)).map((p) => p.id)).toContain(id);
   });

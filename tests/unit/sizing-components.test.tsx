@@ -106,7 +106,8 @@ describe("SizingCalculator units", () => {
     first.unmount();
     render(<SizingCalculator accountSystem={null} save={visitor} />);
     expect((screen.getByRole("radio", { name: "Imperial" }) as HTMLInputElement).checked).toBe(true);
-    expect(field("Bore (in)").value).toBe("4.92126"); // 125 mm / 25.4
+    // An untouched form starts from the imperial defaults, not the metric press converted.
+    expect(field("Bore (in)").value).toBe("5");
   });
 
   it("starts a signed-in user in their saved preference", () => {
@@ -114,6 +115,13 @@ describe("SizingCalculator units", () => {
     render(<SizingCalculator accountSystem="imperial" save={{ signedIn: true, canSave: true, shopName: "Test shop" }} />);
     expect((screen.getByRole("radio", { name: "Imperial" }) as HTMLInputElement).checked).toBe(true);
     expect(screen.getByRole("button", { name: "Save as a planned press" })).toBeTruthy();
+  });
+
+  it("converts the same press when switched by hand, even before anything was typed", () => {
+    render(<SizingCalculator accountSystem={null} save={visitor} />);
+    fireEvent.click(screen.getByRole("radio", { name: "Imperial" }));
+    expect(field("Bore (in)").value).toBe("4.92126"); // 125 mm / 25.4
+    expect(force("kN")).toBe("245 kN");
   });
 
   it("marks a bad input and keeps the last valid figures, marked as such", () => {

@@ -4,6 +4,7 @@ import { formFromInput } from "@/components/sizing/form-from-input";
 import { applySi, convertForm, defaultForm, FIELD_IDS, FIELDS, fromText, rawInput } from "@/components/sizing/form-model";
 import { evaluateSizing, type SizingInput } from "@/lib/hydraulics";
 import { findInputProblems } from "@/lib/hydraulics/validate";
+import { FULL_SIZING_INPUT } from "../fixtures/sizing-inputs";
 
 describe("calculator form model", () => {
   it("the default form is a valid ~25 t(f) press with every check passing", () => {
@@ -13,6 +14,17 @@ describe("calculator form model", () => {
     const result = evaluateSizing(check.input);
     // computed from formula: 200 bar on a 125 mm bore = 245.4 kN = 25.03 t(f)
     expect(result.forceTonnesForce).toBeCloseTo(25.03, 2);
+    expect(result.overall).toBe("ok");
+  });
+
+  it("the imperial defaults are their own round-figure press, also passing every check", () => {
+    const form = defaultForm("imperial");
+    expect(form.values.boreMm).toBe("5");
+    const check = checkForm(form);
+    if (!check.ok) throw new Error(JSON.stringify(check.errors));
+    const result = evaluateSizing(check.input);
+    // computed from formula: 2700 psi on a 5 in bore = 53,014 lbf = 26.5 short tons
+    expect(result.forceShortTons).toBeCloseTo(26.507, 2);
     expect(result.overall).toBe("ok");
   });
 
@@ -97,18 +109,11 @@ describe("calculator form model", () => {
 });
 
 describe("reopening a form from a saved input", () => {
+  // The shared full design, varied so every select and default is exercised on the way back.
   const FULL: SizingInput = {
-    cylinders: { count: 2, boreMm: 100, rodMm: 56, strokeMm: 250 },
-    pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 40 },
+    ...FULL_SIZING_INPUT,
     overallEfficiency: 0.87,
-    pressureBar: 200,
-    reliefBar: 210,
-    motorKw: 5.5,
-    pressDistanceMm: 40,
-    lines: { suctionIdMm: 32, pressureIdMm: 13, returnIdMm: 19 },
     buckling: { endFixity: "fixed-fixed", exposedRodMm: 120, rodYieldMpa: 355 },
-    ratings: { hoseBar: 275, valveBar: 315, pumpBar: 250, cylinderBar: 250, gaugeBar: 400 },
-    reservoir: { volumeL: 150 },
     plate: { role: "bolster", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "A36" },
     columns: { count: 4, diameterMm: 40, grade: "S235JR" },
   };

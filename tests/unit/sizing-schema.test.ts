@@ -4,6 +4,7 @@ import { gaugeCardHref } from "@/components/sizing/links";
 import { gaugeCardQuerySchema } from "@/lib/validation/gauge-card";
 import { plannedPressSchema } from "@/lib/validation/planned-press";
 import { BODY_KEY, problemFieldErrors, sizingFieldErrors, sizingInputSchema } from "@/lib/validation/sizing";
+import { FULL_SIZING_INPUT } from "../fixtures/sizing-inputs";
 
 const MINIMAL: SizingInput = {
   cylinders: { count: 1, boreMm: 125, rodMm: 70, strokeMm: 250 },
@@ -11,21 +12,7 @@ const MINIMAL: SizingInput = {
   pressureBar: 200,
 };
 
-const FULL: SizingInput = {
-  cylinders: { count: 2, boreMm: 100, rodMm: 56, strokeMm: 250 },
-  pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 40 },
-  overallEfficiency: 0.85,
-  pressureBar: 200,
-  reliefBar: 210,
-  motorKw: 5.5,
-  pressDistanceMm: 40,
-  lines: { suctionIdMm: 32, pressureIdMm: 13, returnIdMm: 19 },
-  buckling: { endFixity: "fixed-pinned", exposedRodMm: 120, rodYieldMpa: 355 },
-  ratings: { hoseBar: 275, valveBar: 315, pumpBar: 250, cylinderBar: 250, gaugeBar: 400 },
-  reservoir: { volumeL: 150 },
-  plate: { role: "crosshead", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "S355JR" },
-  columns: { count: 4, diameterMm: 40, grade: "S355JR" },
-};
+const FULL = FULL_SIZING_INPUT;
 
 /** Field errors of an input the schema must refuse. */
 function errorsOf(input: unknown): Record<string, string[]> {

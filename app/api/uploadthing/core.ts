@@ -2,6 +2,7 @@ import "server-only";
 import type { NextRequest } from "next/server";
 import { createUploadthing, type FileRouter } from "uploadthing/next";
 import { UploadThingError } from "uploadthing/server";
+import type { z } from "zod";
 import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { validateSessionToken } from "@/lib/auth/session";
@@ -16,7 +17,7 @@ const f = createUploadthing();
 // The SDK counts files per type, so the total per upload is checked again in the middleware.
 const eachType = { maxFileSize: MAX_PHOTO_FILE_SIZE, maxFileCount: MAX_PHOTOS_PER_UPLOAD } as const;
 
-type PhotoInput = ReturnType<typeof photoUploadInputSchema.parse>;
+type PhotoInput = z.output<typeof photoUploadInputSchema>;
 
 /**
  * Runs before any upload URL is signed: who is asking, and may they attach photos to this record?

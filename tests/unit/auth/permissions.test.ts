@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { ACTIONS, assertCan, can, ForbiddenError, type Action, type Role } from "@/lib/auth/permissions";
+import { ACTIONS, assertCan, can, canEditPhoto, ForbiddenError, type Action, type Role } from "@/lib/auth/permissions";
 
 // The expected matrix, written out independently of lib/auth/permissions.ts (product.md, "Who uses it").
 const EXPECTED: Record<Action, Role[]> = {
@@ -44,5 +44,11 @@ describe("permissions", () => {
   it("throws ForbiddenError naming the action", () => {
     expect(() => assertCan("member", "editShop")).toThrow(ForbiddenError);
     expect(() => assertCan("manager", "editShop")).not.toThrow();
+  });
+
+  it("lets uploaders change their own photos and only managers anyone's", () => {
+    expect([canEditPhoto("member", true), canEditPhoto("inspector", true), canEditPhoto("manager", true)]).toEqual([true, true, true]);
+    expect([canEditPhoto("member", false), canEditPhoto("inspector", false), canEditPhoto("manager", false)]).toEqual([false, false, true]);
+    expect(canEditPhoto(null, true)).toBe(false);
   });
 });

@@ -2,6 +2,7 @@ import { describe, expect, it } from "vitest";
 import { SizingInputError, evaluateSizing, findInputProblems, type SizingInput } from "@/lib/hydraulics";
 import { annulusAreaMm2, circleAreaMm2 } from "@/lib/hydraulics/force";
 import { expectRel } from "./helpers";
+import { FULL_SIZING_INPUT } from "../../fixtures/sizing-inputs";
 
 const BASE: SizingInput = {
   cylinders: { count: 1, boreMm: 100, rodMm: 50, strokeMm: 300 },
@@ -9,21 +10,7 @@ const BASE: SizingInput = {
   pressureBar: 200,
 };
 
-const FULL: SizingInput = {
-  cylinders: { count: 2, boreMm: 100, rodMm: 56, strokeMm: 250 },
-  pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 40 },
-  overallEfficiency: 0.85,
-  pressureBar: 200,
-  reliefBar: 210,
-  motorKw: 5.5,
-  pressDistanceMm: 40,
-  lines: { suctionIdMm: 32, pressureIdMm: 13, returnIdMm: 19 },
-  buckling: { endFixity: "fixed-pinned", exposedRodMm: 120, rodYieldMpa: 355 },
-  ratings: { hoseBar: 275, valveBar: 315, pumpBar: 250, cylinderBar: 250, gaugeBar: 400 },
-  reservoir: { volumeL: 150 },
-  plate: { role: "crosshead", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "S355JR" },
-  columns: { count: 4, diameterMm: 40, grade: "S355JR" },
-};
+const FULL = FULL_SIZING_INPUT;
 
 const levelOf = (input: SizingInput, id: string): string | undefined =>
   evaluateSizing(input).checks.find((c) => c.id === id)?.level;

@@ -9,8 +9,6 @@ import { getPress } from "@/lib/data/presses";
 
 export const metadata: Metadata = { title: "Gauge card" };
 
-const PRINT_CSS = "@page { size: auto; margin: 12mm; } @media print { main { padding: 0 !important; } }";
-
 /** The press's own gauge card: its installed cylinders and relief valve setting. */
 export default async function PressGaugeCardPage({ params }: { params: Promise<{ pressId: string }> }) {
   const { pressId } = await params;
@@ -32,7 +30,6 @@ export default async function PressGaugeCardPage({ params }: { params: Promise<{
   }
   return (
     <div className="print:p-0">
-      <style>{PRINT_CSS}</style>
       <div className="no-print mb-4 flex flex-wrap items-center justify-between gap-3">
         <Link href={`/presses/${pressId}`} className="text-sm font-semibold text-oil-700 underline">
           ← {press.name}
