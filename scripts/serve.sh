@@ -9,6 +9,8 @@ source scripts/ensure-deps.sh
 # shellcheck source=scripts/local-env.sh
 source scripts/local-env.sh
 
+PORT="${PORT:-3000}"
+assert_port_free "$PORT"
 ensure_node_modules "$ROOT"
 bash scripts/db.sh start
 if [[ "${UPLOADTHING_LOCAL_FAKE:-}" == 1 ]]; then bash scripts/fake-uploadthing/start.sh; fi
@@ -18,11 +20,12 @@ export NEXT_TELEMETRY_DISABLED=1
 echo "Building the production app…"
 npx next build
 # Plain HTTP on loopback: the session cookie cannot be __Host-/Secure here (see lib/auth/cookie.ts).
-export NODE_ENV=production INSECURE_COOKIES="${INSECURE_COOKIES:-1}" PORT="${PORT:-3000}"
+export NODE_ENV=production INSECURE_COOKIES="${INSECURE_COOKIES:-1}" PORT
 node scripts/server.mjs &
 SERVER_PID=$!
 trap 'kill "$SERVER_PID" 2>/dev/null || true' INT TERM
 node scripts/wait-for-health.mjs "http://127.0.0.1:$PORT/api/health" 90 || { kill "$SERVER_PID" 2>/dev/null; exit 1; }
+kill -0 "$SERVER_PID" 2>/dev/null || { echo "The app server stopped; see the messages above." >&2; exit 1; }
 npx tsx db/seed.ts --print-only
 echo
 echo "Presswright is running at http://127.0.0.1:$PORT  (Ctrl+C to stop; the database keeps running — npm run db:stop)"

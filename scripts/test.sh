@@ -53,9 +53,11 @@ trap stop_server EXIT
 browser_tests() {
   fresh_test_database
   npx tsx db/seed.ts --quiet
+  assert_port_free "$TEST_PORT"
   NODE_ENV=production INSECURE_COOKIES=1 PORT="$TEST_PORT" node scripts/server.mjs >"$RESULTS/server.log" 2>&1 &
   SERVER_PID=$!
   node scripts/wait-for-health.mjs "http://127.0.0.1:$TEST_PORT/api/health" 90 || { cat "$RESULTS/server.log"; return 1; }
+  kill -0 "$SERVER_PID" 2>/dev/null || { cat "$RESULTS/server.log"; return 1; }
   E2E_BASE_URL="http://127.0.0.1:$TEST_PORT" vitest_project e2e
 }
 
