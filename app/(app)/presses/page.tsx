@@ -1,6 +1,7 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { PressTable } from "@/components/press/press-table";
+import { FreshSWR } from "@/components/ui/fresh-swr";
 import { buttonClass } from "@/components/ui/button";
 import { PageTitle } from "@/components/ui/card";
 import { requireShopContext } from "@/lib/auth/current";
@@ -25,7 +26,9 @@ export default async function PressesPage() {
           ) : null
         }
       />
-      <PressTable initial={presses} units={user.unitSystem} />
+      <FreshSWR>
+        <PressTable initial={presses} units={user.unitSystem} />
+      </FreshSWR>
     </>
   );
 }

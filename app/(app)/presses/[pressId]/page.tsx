@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { AsBuiltPanel } from "@/components/press/as-built-panel";
-import { ComponentList } from "@/components/press/component-list";
+import { ComponentTable } from "@/components/press/component-table";
+import { FreshSWR } from "@/components/ui/fresh-swr";
 import { PressPhotos } from "@/components/photos/press-photos";
 import { HourMeterForm } from "@/components/press/hour-meter-form";
 import { PressTimeline } from "@/components/press/press-timeline";
@@ -95,7 +96,9 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         </Card>
         <div id="components" className="lg:col-span-2">
           <Card title={`Parts (${installed.length})`}>
-            <ComponentList pressId={pressId} parts={installed} units={units} currency={currency} canEdit={canEdit} />
+            <FreshSWR>
+              <ComponentTable pressId={pressId} initial={installed} units={units} currency={currency} canEdit={canEdit} />
+            </FreshSWR>
           </Card>
         </div>
         <Card title="Hour meter">
