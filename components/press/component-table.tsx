@@ -1,9 +1,10 @@
 "use client";
 
-import { createColumnHelper, flexRender, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
+import { createColumnHelper, getCoreRowModel, getFilteredRowModel, getSortedRowModel, useReactTable, type SortingState } from "@tanstack/react-table";
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
+import { DataTable } from "@/components/ui/data-table";
 import type { ComponentRow } from "@/lib/data/components";
 import { fetchJson } from "@/lib/fetch-json";
 import { KIND_LABELS } from "@/lib/press/component-fields";
@@ -75,40 +76,7 @@ export function ComponentTable({ pressId, initial, units, currency, canEdit }: P
       </label>
       {error ? <p className="text-sm text-fail">Could not refresh the parts: {(error as Error).message}</p> : null}
       <div className="overflow-x-auto">
-        <table className="w-full min-w-[40rem] text-left text-sm" data-testid="component-list">
-          <thead className="border-b border-steel-200 text-xs uppercase tracking-wide text-steel-500">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} className="px-2 py-2" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}>
-                      {h.column.getCanSort() ? (
-                        <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase">
-                          {flexRender(h.column.columnDef.header, h.getContext())}
-                          <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
-                        </button>
-                      ) : (
-                        flexRender(h.column.columnDef.header, h.getContext())
-                      )}
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-steel-100 align-top last:border-0">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-2 py-2">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
+        <DataTable table={table} minWidth="40rem" testId="component-list" cellClass="px-2 py-2" />
       </div>
     </div>
   );

@@ -2,7 +2,6 @@
 
 import {
   createColumnHelper,
-  flexRender,
   getCoreRowModel,
   getFilteredRowModel,
   getSortedRowModel,
@@ -12,6 +11,7 @@ import {
 import Link from "next/link";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
+import { DataTable } from "@/components/ui/data-table";
 import { showQuantity } from "@/components/ui/quantity";
 import type { PressSummary } from "@/lib/data/presses";
 import { fetchJson } from "@/lib/fetch-json";
@@ -81,37 +81,7 @@ export function PressTable({ initial, units }: { initial: PressSummary[]; units:
       </div>
       {error ? <p className="text-sm text-fail">Could not refresh the list: {(error as Error).message}</p> : null}
       <div className="overflow-x-auto rounded-lg bg-white ring-1 ring-steel-200">
-        <table className="w-full min-w-[44rem] text-left text-sm" data-testid="press-table">
-          <thead className="border-b border-steel-200 text-xs uppercase tracking-wide text-steel-500">
-            {table.getHeaderGroups().map((hg) => (
-              <tr key={hg.id}>
-                {hg.headers.map((h) => {
-                  const sorted = h.column.getIsSorted();
-                  return (
-                    <th key={h.id} className="px-3 py-2" aria-sort={sorted ? (sorted === "asc" ? "ascending" : "descending") : undefined}>
-                      <button type="button" onClick={h.column.getToggleSortingHandler()} className="inline-flex items-center gap-1 uppercase">
-                        {flexRender(h.column.columnDef.header, h.getContext())}
-                        <span aria-hidden="true">{sorted === "asc" ? "▲" : sorted === "desc" ? "▼" : ""}</span>
-                      </button>
-                    </th>
-                  );
-                })}
-              </tr>
-            ))}
-          </thead>
-          <tbody>
-            {table.getRowModel().rows.map((row) => (
-              <tr key={row.id} className="border-b border-steel-100 last:border-0">
-                {row.getVisibleCells().map((cell) => (
-                  <td key={cell.id} className="px-3 py-2 font-mono first:font-sans">
-                    {flexRender(cell.column.columnDef.cell, cell.getContext())}
-                  </td>
-                ))}
-              </tr>
-            ))}
-          </tbody>
-        </table>
-        {table.getRowModel().rows.length === 0 ? <p className="p-4 text-sm text-steel-600">No presses match.</p> : null}
+        <DataTable table={table} minWidth="44rem" testId="press-table" cellClass="px-3 py-2 font-mono first:font-sans" empty="No presses match." />
       </div>
     </div>
   );
