@@ -75,6 +75,22 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           </div>
         }
       />
+      <nav aria-label="Sections of this press" className="no-print -mx-4 mb-4 overflow-x-auto px-4 lg:hidden">
+        <ul className="flex gap-2 whitespace-nowrap text-sm">
+          {[
+            ["#as-built", "As-built check"],
+            ["#components", "Parts"],
+            ["#photos", "Photos"],
+            ["#history", "History"],
+          ].map(([href, label]) => (
+            <li key={href}>
+              <a href={href} className="inline-flex min-h-10 items-center rounded-full bg-white px-3 ring-1 ring-steel-200">
+                {label}
+              </a>
+            </li>
+          ))}
+        </ul>
+      </nav>
       {failing.length > 0 ? (
         <p role="alert" className="mb-4 rounded-lg bg-fail-soft p-3 text-sm font-medium text-fail ring-1 ring-fail/30" data-testid="as-built-alert">
           The as-built check fails: {failing.map((c) => c.message).join(" ")}
@@ -91,9 +107,11 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
             ))}
           </dl>
         </Card>
-        <Card title="As-built check">
-          <AsBuiltPanel asBuilt={asBuilt} units={units} motorKw={motor?.spec.kind === "motor" ? motor.spec.powerKw : null} />
-        </Card>
+        <div id="as-built">
+          <Card title="As-built check">
+            <AsBuiltPanel asBuilt={asBuilt} units={units} motorKw={motor?.spec.kind === "motor" ? motor.spec.powerKw : null} />
+          </Card>
+        </div>
         <div id="components" className="lg:col-span-2">
           <Card title={`Parts (${installed.length})`}>
             <FreshSWR>
