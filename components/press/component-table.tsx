@@ -75,7 +75,7 @@ export function ComponentTable({ pressId, initial, units, currency, canEdit }: P
         </select>
       </label>
       {error ? <p className="text-sm text-fail">Could not refresh the parts: {(error as Error).message}</p> : null}
-      <div className="overflow-x-auto">
+      <div className="relative overflow-x-auto">
         <DataTable table={table} minWidth="40rem" testId="component-list" cellClass="px-2 py-2" />
       </div>
     </div>

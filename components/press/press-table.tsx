@@ -80,7 +80,7 @@ export function PressTable({ initial, units }: { initial: PressSummary[]; units:
         </label>
       </div>
       {error ? <p className="text-sm text-fail">Could not refresh the list: {(error as Error).message}</p> : null}
-      <div className="overflow-x-auto rounded-lg bg-white ring-1 ring-steel-200">
+      <div className="relative overflow-x-auto rounded-lg bg-white ring-1 ring-steel-200">
         <DataTable table={table} minWidth="44rem" testId="press-table" cellClass="px-3 py-2 font-mono first:font-sans" empty="No presses match." />
       </div>
     </div>

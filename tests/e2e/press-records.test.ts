@@ -69,6 +69,10 @@ describe("press records", () => {
     await page.goto("/presses");
     await page.getByRole("link", { name: "Bay 1 H-frame" }).click();
     await page.waitForURL(/\/presses\/[a-z2-7]{24}$/);
+    await page.getByTestId("component-list").waitFor();
+    // The parts table scrolls inside its card; the press page itself must not scroll sideways at phone width.
+    expect(await page.evaluate(() => document.documentElement.scrollWidth - window.innerWidth)).toBeLessThanOrEqual(0);
+    await screenshot(page, "press-390");
     await page.goto(`${page.url()}/components/new`);
     await page.getByLabel("Name", { exact: true }).fill("Odd cylinder");
     await page.locator('input[name="spec.boreMm"]').fill("80");

@@ -96,7 +96,7 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           The as-built check fails: {failing.map((c) => c.message).join(" ")}
         </p>
       ) : null}
-      <div className="grid gap-4 lg:grid-cols-2">
+      <div className="grid gap-4 lg:grid-cols-2 [&>*]:min-w-0">
         <Card title="Overview">
           <dl className="grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
             {rows.map(([label, value]) => (
