@@ -17,6 +17,21 @@ export async function apiSession(req: NextRequest): Promise<{ session: ValidSess
   return token ? validateSessionToken(token) : null;
 }
 
+/** Raised when an API request needs a session and has none (answered 401). */
+export class UnauthorizedError extends Error {
+  constructor() {
+    super("Sign in first.");
+    this.name = "UnauthorizedError";
+  }
+}
+
+/** The signed-in user of an API request; throws UnauthorizedError (→ 401) when there is none. */
+export async function requireApiSession(req: NextRequest): Promise<{ session: ValidSession; user: SessionUser }> {
+  const current = await apiSession(req);
+  if (!current) throw new UnauthorizedError();
+  return current;
+}
+
 type Handler<C> = (req: NextRequest, context: C) => Promise<Response>;
 
 /**
@@ -38,6 +53,7 @@ export function apiRoute<C>(handler: Handler<C>, options: { csrf?: boolean } = {
 }
 
 export function errorResponse(error: unknown): NextResponse {
+  if (error instanceof UnauthorizedError) return jsonError(401, error.message);
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
   if (error instanceof ConflictError) return jsonError(409, error.message);

@@ -31,11 +31,17 @@ export function Field({ name, label, errors, hint, id, className = "", ...input 
           {hint}
         </p>
       ) : null}
-      {errors?.length ? (
-        <p id={errorId} className="text-sm text-fail">
-          {errors.join(" ")}
-        </p>
-      ) : null}
+      <FieldError id={errorId} errors={errors} />
     </div>
+  );
+}
+
+/** A field's error text, referenced by the control's aria-describedby. */
+export function FieldError({ id, errors }: { id: string; errors?: string[] }) {
+  if (!errors?.length) return null;
+  return (
+    <p id={id} className="text-sm text-fail">
+      {errors.join(" ")}
+    </p>
   );
 }

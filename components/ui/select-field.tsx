@@ -1,4 +1,5 @@
 import type { SelectHTMLAttributes } from "react";
+import { FieldError } from "./field";
 
 type Props = SelectHTMLAttributes<HTMLSelectElement> & {
   name: string;
@@ -30,11 +31,7 @@ export function SelectField({ name, label, options, errors, id, ...select }: Pro
           </option>
         ))}
       </select>
-      {errors?.length ? (
-        <p id={errorId} className="text-sm text-fail">
-          {errors.join(" ")}
-        </p>
-      ) : null}
+      <FieldError id={errorId} errors={errors} />
     </div>
   );
 }

@@ -2,7 +2,7 @@ import "server-only";
 import { cookies, headers } from "next/headers";
 import { forbidden, notFound, redirect } from "next/navigation";
 import { cache } from "react";
-import { getActiveShop, listMyShops, type ShopSummary } from "@/lib/data/shops";
+import { getMyShops, type ShopSummary } from "@/lib/data/shops";
 import { clientIp } from "./client-ip";
 import { sessionCookieName } from "./cookie";
 import { ForbiddenError, NotFoundError } from "./permissions";
@@ -29,13 +29,20 @@ export type ShopContext = {
   shops: ShopSummary[];
 };
 
-/** Signed-in user, their working shop and all their shops; every (app) page starts here. */
+/** Signed-in user, their working shop and all their shops, or null when signed out (or in no shop). */
+export const getShopContext = cache(async (): Promise<ShopContext | null> => {
+  const current = await getCurrentSession();
+  if (!current) return null;
+  const { shop, shops } = await getMyShops({ userId: current.user.id }, current.user.activeShopId);
+  return shop ? { ...current, shop, shops } : null;
+});
+
+/** As getShopContext, for pages that need it: every (app) page starts here. */
 export const requireShopContext = cache(async (): Promise<ShopContext> => {
-  const { session, user } = await requireSignedIn();
-  const actor = { userId: user.id };
-  const [shop, shops] = await Promise.all([getActiveShop(actor, user.activeShopId), listMyShops(actor)]);
-  if (!shop) redirect("/account?noshop=1");
-  return { session, user, shop, shops };
+  await requireSignedIn();
+  const context = await getShopContext();
+  if (!context) redirect("/account?noshop=1");
+  return context;
 });
 
 export async function requestIp(): Promise<string> {

@@ -40,9 +40,7 @@ export function can(role: Role | null | undefined, action: Action): boolean {
 }
 
 export const canEditShop = (role: Role | null): boolean => can(role, "editShop");
-export const canManageMembers = (role: Role | null): boolean => can(role, "manageMembers");
 export const canEditPress = (role: Role | null): boolean => can(role, "editPress");
-export const canSignInspection = (role: Role | null): boolean => can(role, "signInspection");
 /** Photos: the uploader (still a member who may attach photos) or a manager. */
 export const canEditPhoto = (role: Role | null, isUploader: boolean): boolean => can(role, isUploader ? "attachPhoto" : "editAnyPhoto");
 

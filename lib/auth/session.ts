@@ -1,5 +1,5 @@
 import "server-only";
-import { and, eq, ne } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { sessions, users } from "@/db/schema";
 import { generateSessionToken, parseSessionToken, secretMatches } from "./session-token";
@@ -10,8 +10,6 @@ export const INACTIVITY_TIMEOUT_MS = 1000 * 60 * 60 * 24 * 7;
 export const ABSOLUTE_LIFETIME_MS = 1000 * 60 * 60 * 24 * 30;
 /** Refresh last_verified_at at most this often, to spare a write on every request. */
 const ACTIVITY_WRITE_INTERVAL_MS = 1000 * 60 * 60;
-/** Changing credentials or signing records needs a sign-in at most this old. */
-export const RECENT_SIGN_IN_MS = 1000 * 60 * 10;
 
 export type SessionUser = {
   id: string;
@@ -81,14 +79,7 @@ export async function invalidateSession(sessionId: string): Promise<void> {
   await db.delete(sessions).where(eq(sessions.id, sessionId));
 }
 
-/** Ends every session of a user, optionally keeping one (the one that just changed the password is replaced anyway). */
-export async function invalidateUserSessions(userId: string, exceptSessionId?: string): Promise<void> {
-  const where = exceptSessionId
-    ? and(eq(sessions.userId, userId), ne(sessions.id, exceptSessionId))
-    : eq(sessions.userId, userId);
-  await db.delete(sessions).where(where);
-}
-
-export function isRecentSignIn(session: ValidSession, now = new Date()): boolean {
-  return now.getTime() - session.createdAt.getTime() <= RECENT_SIGN_IN_MS;
+/** Ends every session of a user (on a password change, ASVS 7.4.3). */
+export async function invalidateUserSessions(userId: string): Promise<void> {
+  await db.delete(sessions).where(eq(sessions.userId, userId));
 }

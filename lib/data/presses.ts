@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, memberships, presses } from "@/db/schema";
+import { components, memberships, presses, shops } from "@/db/schema";
 import type { FRAME_TYPES } from "@/db/schema/presses";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import { evaluateSizing, type SizingInput } from "@/lib/hydraulics";
@@ -54,6 +54,8 @@ export type PressDetail = PressSummary & {
   workingPressureBar: number | null;
   notes: string | null;
   createdAt: Date;
+  /** The shop's ISO 4217 code, for part costs. */
+  currency: string;
   role: Role;
 };
 
@@ -70,10 +72,12 @@ export async function getPress(actor: Actor, pressId: string): Promise<PressDeta
       workingPressureBar: presses.workingPressureBar,
       notes: presses.notes,
       createdAt: presses.createdAt,
+      currency: shops.currency,
       role: memberships.role,
     })
     .from(presses)
     .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, actor.userId)))
+    .innerJoin(shops, eq(shops.id, presses.shopId))
     .where(eq(presses.id, pressId))
     .limit(1);
   if (!row) throw new NotFoundError("Press not found");

@@ -18,12 +18,18 @@ export async function listMyShops(actor: Actor): Promise<ShopSummary[]> {
 }
 
 /**
- * The shop the actor is working in: the one they last switched to if they are still a member,
- * otherwise their first shop. Null only for a user with no memberships at all.
+ * The actor's shops and the one they are working in: the one they last switched to if they are
+ * still a member, otherwise their first shop (null only for a user with no memberships at all).
+ * One query for both, since every signed-in page needs both.
  */
+export async function getMyShops(actor: Actor, preferredShopId: string | null): Promise<{ shop: ShopSummary | null; shops: ShopSummary[] }> {
+  const shops = await listMyShops(actor);
+  return { shop: shops.find((s) => s.id === preferredShopId) ?? shops[0] ?? null, shops };
+}
+
+/** The shop the actor is working in (see getMyShops). */
 export async function getActiveShop(actor: Actor, preferredShopId: string | null): Promise<ShopSummary | null> {
-  const mine = await listMyShops(actor);
-  return mine.find((s) => s.id === preferredShopId) ?? mine[0] ?? null;
+  return (await getMyShops(actor, preferredShopId)).shop;
 }
 
 /** Switches the actor's working shop. Authorization: the actor must be a member (else not-found). */

@@ -58,10 +58,6 @@ export function isDuplicateKey(error: unknown): boolean {
   return false;
 }
 
-export async function emailExists(email: string): Promise<boolean> {
-  const [row] = await db.select({ id: users.id }).from(users).where(eq(users.email, normaliseEmail(email))).limit(1);
-  return Boolean(row);
-}
 
 export type PasswordChangeResult = { ok: true; token: string } | { ok: false; reason: "wrong-current" };
 

@@ -6,15 +6,14 @@ import { getComponent, type ComponentRow } from "@/lib/data/components";
 import { getPress, type PressDetail } from "@/lib/data/presses";
 import type { UnitSystem } from "@/lib/units";
 
-export type EditContext = { press: PressDetail; units: UnitSystem; currency: string; today: string };
+export type EditContext = { press: PressDetail; units: UnitSystem; today: string };
 
-/** For the part-editing pages: the press (404 if foreign), managers only (403), shop currency, today's date. */
+/** For the part-editing pages: the press (404 if foreign; it carries the shop's currency), managers only (403), today's date. */
 export async function pressEditContext(pressId: string): Promise<EditContext> {
-  const { user, shops } = await requireShopContext();
+  const { user } = await requireShopContext();
   const press = await orPageError(getPress({ userId: user.id }, pressId));
   if (!canEditPress(press.role)) forbidden();
-  const currency = shops.find((s) => s.id === press.shopId)?.currency ?? "USD";
-  return { press, units: user.unitSystem, currency, today: new Date().toISOString().slice(0, 10) };
+  return { press, units: user.unitSystem, today: new Date().toISOString().slice(0, 10) };
 }
 
 /** As above, plus one of the press's components (404 when it belongs elsewhere). */

@@ -35,8 +35,3 @@ export function localUploadthingEnv(port: number = LOCAL_UPLOADTHING_PORT): Uplo
     UPLOADTHING_UFS_APP_ID_LOCATION: "path",
   };
 }
-
-/** Origin of served files, for next.config's images.remotePatterns. */
-export function localUploadthingFileOrigin(port: number = LOCAL_UPLOADTHING_PORT): string {
-  return `http://localhost:${port}`;
-}

@@ -1,12 +1,11 @@
 "use server";
 
 import { redirect } from "next/navigation";
+import { refusalState } from "@/lib/action-refusal";
 import type { ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
-import { ForbiddenError } from "@/lib/auth/permissions";
 import { createPress, updatePress } from "@/lib/data/press-edits";
-import { ConflictError } from "@/lib/errors";
 import { fieldErrorsFrom, formValues } from "@/lib/press/form-values";
 import { pressFromForm } from "@/lib/press/press-form";
 import { pressInputSchema, pressPatchSchema } from "@/lib/validation/press";
@@ -21,8 +20,7 @@ export async function createPressAction(_prev: ActionState, form: FormData): Pro
   try {
     ({ id } = await createPress({ userId: user.id }, shop.id, parsed.data));
   } catch (error) {
-    if (error instanceof ForbiddenError) return { ok: false, message: "Only a manager of this shop can add presses.", values };
-    throw error;
+    return refusalState(error, values, "Only a manager of this shop can add presses.");
   }
   redirect(`/presses/${id}`);
 }
@@ -36,9 +34,7 @@ export async function updatePressAction(pressId: string, _prev: ActionState, for
   try {
     await updatePress({ userId: user.id }, pressId, parsed.data);
   } catch (error) {
-    if (error instanceof ForbiddenError) return { ok: false, message: "Only a manager of this shop can edit presses.", values };
-    if (error instanceof ConflictError) return { ok: false, message: error.message, values };
-    throw error;
+    return refusalState(error, values, "Only a manager of this shop can edit presses.");
   }
   redirect(`/presses/${pressId}`);
 }

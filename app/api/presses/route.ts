@@ -3,7 +3,7 @@ import { z } from "zod";
 import { createPress } from "@/lib/data/press-edits";
 import { listPresses } from "@/lib/data/presses";
 import { getActiveShop } from "@/lib/data/shops";
-import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { apiRoute, jsonError, requireApiSession } from "@/lib/http";
 import { ID_PATTERN } from "@/lib/ids";
 import { pressInputSchema } from "@/lib/validation/press";
 
@@ -11,8 +11,7 @@ const shopIdParam = z.string().regex(ID_PATTERN, "Unknown shop id.");
 
 /** Presses of `?shopId=` (default: the user's working shop); a shop the user is not in lists nothing. */
 export const GET = apiRoute(async (req: NextRequest) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const actor = { userId: current.user.id };
   const requested = req.nextUrl.searchParams.get("shopId");
   const shopId = requested ? shopIdParam.parse(requested) : (await getActiveShop(actor, current.user.activeShopId))?.id;
@@ -22,8 +21,7 @@ export const GET = apiRoute(async (req: NextRequest) => {
 
 /** Creates a press (SI body) in `shopId` or the working shop. Managers only. */
 export const POST = apiRoute(async (req: NextRequest) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const actor = { userId: current.user.id };
   const body = z.looseObject({ shopId: shopIdParam.optional() }).parse(await req.json().catch(() => null));
   const { shopId: requested, ...rest } = body;

@@ -3,11 +3,10 @@ import type { NextRequest } from "next/server";
 import { createUploadthing, type FileRouter } from "uploadthing/next";
 import { UploadThingError } from "uploadthing/server";
 import type { z } from "zod";
-import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
-import { validateSessionToken } from "@/lib/auth/session";
 import { authorizePhotoTarget } from "@/lib/data/photos";
 import { ConflictError } from "@/lib/errors";
+import { apiSession } from "@/lib/http";
 import { MAX_PHOTO_FILE_SIZE, MAX_PHOTOS_PER_UPLOAD } from "@/lib/photos/limits";
 import { storeUploadedPhoto, type PhotoUploadMetadata } from "@/lib/photos/store-upload";
 import { photoUploadInputSchema } from "@/lib/validation/photo";
@@ -28,8 +27,7 @@ async function authorizeUpload(req: NextRequest, input: PhotoInput, fileCount: n
   if (fileCount > MAX_PHOTOS_PER_UPLOAD) {
     throw new UploadThingError({ code: "TOO_MANY_FILES", message: `Upload at most ${MAX_PHOTOS_PER_UPLOAD} photos at a time.` });
   }
-  const token = req.cookies.get(sessionCookieName())?.value;
-  const current = token ? await validateSessionToken(token) : null;
+  const current = await apiSession(req);
   if (!current) throw new UploadThingError({ code: "FORBIDDEN", message: "Sign in first." });
   try {
     const target = await authorizePhotoTarget({ userId: current.user.id }, input);

@@ -5,6 +5,7 @@
 import http from "node:http";
 import type { AddressInfo } from "node:net";
 import { createRouteHandler, createUploadthing, type FileRouter } from "uploadthing/server";
+import { readNodeRequest, sendWebResponse } from "./serve-route";
 
 export type Mode = "dev" | "prod";
 export type CompletedCall = { mode: Mode; metadata: Record<string, unknown>; name: string; key: string; ufsUrl: string; fileHash: string };
@@ -67,20 +68,12 @@ export async function startTestApp() {
         res.writeHead(404).end();
         return;
       }
-      const chunks: Buffer[] = [];
-      for await (const chunk of req) chunks.push(chunk as Buffer);
-      // Host stays: the SDK derives the default callback URL from it.
-      const headers = new Headers();
-      for (const [name, value] of Object.entries(req.headers)) {
-        if (typeof value === "string" && !["connection", "content-length", "transfer-encoding"].includes(name)) headers.set(name, value);
-      }
+      const { headers, body } = await readNodeRequest(req);
       const signature = headers.get("x-uploadthing-signature");
       if (controls.tamperCallbackSignature && signature) headers.set("x-uploadthing-signature", flipLastHexDigit(signature));
       const hasBody = req.method !== "GET" && req.method !== "HEAD";
-      const request = new Request(`http://${req.headers.host}${req.url}`, { method: req.method, headers, body: hasBody ? Buffer.concat(chunks) : undefined });
-      const response = await handlers[mode](request);
-      res.writeHead(response.status, Object.fromEntries(response.headers));
-      res.end(Buffer.from(await response.arrayBuffer()));
+      const request = new Request(`http://${req.headers.host}${req.url}`, { method: req.method, headers, body: hasBody ? body : undefined });
+      await sendWebResponse(res, await handlers[mode](request));
     })().catch((error: unknown) => {
       console.error("test app failed", error);
       res.writeHead(500).end();

@@ -2,23 +2,15 @@
 
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
+import { refusalState } from "@/lib/action-refusal";
 import type { ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
-import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { createComponent, deleteComponent, removeComponent, replaceComponent, updateComponent } from "@/lib/data/components";
 import { recordHourMeter } from "@/lib/data/press-edits";
-import { ConflictError } from "@/lib/errors";
 import { componentFromForm } from "@/lib/press/component-form";
 import { fieldErrorsFrom, formValues, plainNumber } from "@/lib/press/form-values";
 import { componentInputSchema, hourReadingSchema, replaceComponentSchema } from "@/lib/validation/press";
-
-/** Known refusals become a message on the form; anything else is a real error. */
-function refusal(error: unknown, values: Record<string, string>): ActionState {
-  if (error instanceof ForbiddenError) return { ok: false, message: "Your role in this shop does not allow this change.", values };
-  if (error instanceof ConflictError || error instanceof NotFoundError) return { ok: false, message: error.message, values };
-  throw error;
-}
 
 export async function addComponentAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
@@ -29,7 +21,7 @@ export async function addComponentAction(pressId: string, _prev: ActionState, fo
   try {
     await createComponent({ userId: user.id }, pressId, parsed.data);
   } catch (error) {
-    return refusal(error, values);
+    return refusalState(error, values);
   }
   revalidatePath(`/presses/${pressId}`);
   redirect(`/presses/${pressId}#components`);
@@ -46,7 +38,7 @@ export async function editComponentAction(pressId: string, componentId: string, 
   try {
     await updateComponent({ userId: user.id }, componentId, patch);
   } catch (error) {
-    return refusal(error, values);
+    return refusalState(error, values);
   }
   revalidatePath(`/presses/${pressId}`);
   redirect(`/presses/${pressId}#components`);
@@ -65,7 +57,7 @@ export async function replaceComponentAction(pressId: string, componentId: strin
   try {
     await replaceComponent({ userId: user.id }, componentId, { reason: outer.data.reason, removedOn: outer.data.removedOn, replacement: replacement.data });
   } catch (error) {
-    return refusal(error, values);
+    return refusalState(error, values);
   }
   revalidatePath(`/presses/${pressId}`);
   redirect(`/presses/${pressId}#history`);
@@ -83,7 +75,7 @@ export async function removeComponentAction(pressId: string, componentId: string
       await removeComponent({ userId: user.id }, componentId, parsed.data);
     }
   } catch (error) {
-    return refusal(error, values);
+    return refusalState(error, values);
   }
   revalidatePath(`/presses/${pressId}`);
   redirect(`/presses/${pressId}#components`);
@@ -98,7 +90,7 @@ export async function recordHoursAction(pressId: string, _prev: ActionState, for
   try {
     await recordHourMeter({ userId: user.id }, pressId, parsed.data);
   } catch (error) {
-    return refusal(error, values);
+    return refusalState(error, values);
   }
   revalidatePath(`/presses/${pressId}`);
   return { ok: true, message: `Recorded ${parsed.data.hours} h.` };

@@ -24,13 +24,12 @@ export const metadata: Metadata = { title: "Press" };
 
 export default async function PressPage({ params }: { params: Promise<{ pressId: string }> }) {
   const { pressId } = await params;
-  const { user, shops } = await requireShopContext();
+  const { user } = await requireShopContext();
   const actor = { userId: user.id };
   const press = await orPageError(getPress(actor, pressId));
   const [all, readings] = await Promise.all([listComponents(actor, pressId, { includeRemoved: true }), listHourReadings(actor, pressId)]);
   const installed = all.filter((c) => !c.removedOn);
   const units = user.unitSystem;
-  const currency = shops.find((s) => s.id === press.shopId)?.currency ?? "USD";
   const asBuilt = evaluateAsBuilt(press, installed, units);
   const failing = asBuilt.checks.filter((c) => c.level === "fail");
   const motor = installed.find((c) => c.spec.kind === "motor");
@@ -115,7 +114,7 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         <div id="components" className="lg:col-span-2">
           <Card title={`Parts (${installed.length})`}>
             <FreshSWR>
-              <ComponentTable pressId={pressId} initial={installed} units={units} currency={currency} canEdit={canEdit} />
+              <ComponentTable pressId={pressId} initial={installed} units={units} currency={press.currency} canEdit={canEdit} />
             </FreshSWR>
           </Card>
         </div>

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { deletePhoto, getPhoto, updatePhoto } from "@/lib/data/photos";
-import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { apiRoute, jsonError, requireApiSession } from "@/lib/http";
 import { StorageUnavailableError } from "@/lib/uploads/storage";
 import { photoPatchSchema } from "@/lib/validation/photo";
 
@@ -8,16 +8,14 @@ type Context = { params: Promise<{ photoId: string }> };
 
 /** One photo. Members of its press's shop; anyone else gets 404. */
 export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { photoId } = await params;
   return NextResponse.json({ photo: await getPhoto({ userId: current.user.id }, photoId) });
 });
 
 /** Changes the caption or kind. Its uploader or a manager. */
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { photoId } = await params;
   const patch = photoPatchSchema.parse(await req.json().catch(() => null));
   return NextResponse.json({ photo: await updatePhoto({ userId: current.user.id }, photoId, patch) });
@@ -25,8 +23,7 @@ export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
 
 /** Deletes the photo and its stored files. Its uploader or a manager; 503 while storage is unreachable. */
 export const DELETE = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { photoId } = await params;
   try {
     await deletePhoto({ userId: current.user.id }, photoId);

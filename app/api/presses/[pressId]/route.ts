@@ -1,15 +1,14 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { updatePress } from "@/lib/data/press-edits";
 import { getPress } from "@/lib/data/presses";
-import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { apiRoute, requireApiSession } from "@/lib/http";
 import { pressPatchSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ pressId: string }> };
 
 /** One press; another shop's press (or an unknown id) is 404. */
 export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { pressId } = await params;
   const { role: _role, ...press } = await getPress({ userId: current.user.id }, pressId);
   return NextResponse.json({ press });
@@ -17,8 +16,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 
 /** Edits a press (SI fields, strict). Managers only; a retired press answers 409. */
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { pressId } = await params;
   const patch = pressPatchSchema.parse(await req.json().catch(() => null));
   await updatePress({ userId: current.user.id }, pressId, patch);

@@ -12,13 +12,12 @@ export const metadata: Metadata = { title: "Parts list" };
 
 export default async function PartsListPage({ params }: { params: Promise<{ pressId: string }> }) {
   const { pressId } = await params;
-  const { user, shops } = await requireShopContext();
+  const { user } = await requireShopContext();
   const actor = { userId: user.id };
   const press = await orPageError(getPress(actor, pressId));
   const parts = await listComponents(actor, pressId);
-  const currency = shops.find((s) => s.id === press.shopId)?.currency ?? "USD";
   const totals = partsTotals(parts);
-  const money = (cents: number | null) => formatMoney(cents, currency);
+  const money = (cents: number | null) => formatMoney(cents, press.currency);
   return (
     <>
       <PageTitle

@@ -1,14 +1,13 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { replaceComponent } from "@/lib/data/components";
-import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { apiRoute, requireApiSession } from "@/lib/http";
 import { componentInputSchema, replaceComponentSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ componentId: string }> };
 
 /** Replaces a part in one transaction; the old one stays in the history. Managers only. */
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { componentId } = await params;
   const body = replaceComponentSchema.parse(await req.json().catch(() => null));
   const replacement = componentInputSchema.parse(body.replacement);

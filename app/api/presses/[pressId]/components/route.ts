@@ -1,14 +1,13 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { createComponent, listComponents } from "@/lib/data/components";
-import { apiRoute, apiSession, jsonError } from "@/lib/http";
+import { apiRoute, requireApiSession } from "@/lib/http";
 import { componentInputSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ pressId: string }> };
 
 /** Components of a press; `?include=removed` adds the replaced and removed ones (history). */
 export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { pressId } = await params;
   const includeRemoved = req.nextUrl.searchParams.get("include") === "removed";
   return NextResponse.json({ components: await listComponents({ userId: current.user.id }, pressId, { includeRemoved }) });
@@ -16,8 +15,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 
 /** Adds a component (SI spec validated against its kind). Managers only. */
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
-  const current = await apiSession(req);
-  if (!current) return jsonError(401, "Sign in first.");
+  const current = await requireApiSession(req);
   const { pressId } = await params;
   const input = componentInputSchema.parse(await req.json().catch(() => null));
   const { id } = await createComponent({ userId: current.user.id }, pressId, input);

@@ -11,7 +11,7 @@ export const metadata: Metadata = { title: "Add a part" };
 export default async function NewComponentPage({ params, searchParams }: { params: Promise<{ pressId: string }>; searchParams: Promise<{ kind?: string }> }) {
   const { pressId } = await params;
   const { kind } = await searchParams;
-  const { press, units, currency, today } = await pressEditContext(pressId);
+  const { press, units, today } = await pressEditContext(pressId);
   const initialKind = kind && kind in KIND_LABELS ? (kind as ComponentKind) : "cylinder";
   return (
     <>
@@ -22,7 +22,7 @@ export default async function NewComponentPage({ params, searchParams }: { param
           mode="add"
           initial={{ kind: initialKind, installedOn: press.lifecycle === "planned" ? "" : today, purchased: press.lifecycle === "planned" ? "off" : "on" }}
           units={units}
-          currency={currency}
+          currency={press.currency}
           today={today}
         />
       </Card>

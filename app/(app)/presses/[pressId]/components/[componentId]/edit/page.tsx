@@ -9,7 +9,7 @@ export const metadata: Metadata = { title: "Edit part" };
 
 export default async function EditComponentPage({ params }: { params: Promise<{ pressId: string; componentId: string }> }) {
   const { pressId, componentId } = await params;
-  const { press, component, units, currency, today } = await componentEditContext(pressId, componentId);
+  const { press, component, units, today } = await componentEditContext(pressId, componentId);
   return (
     <>
       <PageTitle title={`Edit ${component.label}`} subtitle={`${press.name} · to record a new part in its place, use Replace instead`} />
@@ -20,7 +20,7 @@ export default async function EditComponentPage({ params }: { params: Promise<{ 
           kind={component.kind}
           initial={componentFormValues(component, units)}
           units={units}
-          currency={currency}
+          currency={press.currency}
           today={today}
         />
       </Card>
