@@ -5,3 +5,5 @@ export * from "./audit";
 export * from "./rate-limits";
 export * from "./components";
 export * from "./photos";
+export * from "./outbox";
+export * from "./tag-outs";
