@@ -25,6 +25,11 @@ export const SOURCES = {
   EN: "readle.co.uk, steel grades (EN 10025)",
   ITI: "itidirect.co.uk, ram gauges",
   TF: "Wikipedia, Ton-force",
+  JOH: "Wikipedia, Johnson's parabolic formula",
+  PLY: "University of Plymouth design notes, buckling load calculator (D. J. Grieve, 1999)",
+  AISC: "AISC 360-22 Commentary, Table C-A-7.1, recommended design values of K",
+  CSG: "control-specialties.com, pressure gauges (reading at 50–75 % of full scale)",
+  B40: "ASME B40.100 (accuracy grades over the middle half of the scale)",
 } as const;
 
 export type SourceKey = keyof typeof SOURCES;
