@@ -72,7 +72,8 @@ describe("calculator form model", () => {
       const si = fromText(FIELDS[id], back.values[id], "metric");
       const before = fromText(FIELDS[id], edited.values[id], "imperial");
       if (before === undefined) expect(si).toBeUndefined();
-      else expect(si).toBeCloseTo(before, 2);
+      // restored text is exact; converted text carries 6 significant digits (mm⁴ values run to 10⁸)
+      else expect(Math.abs((si ?? Number.NaN) / before - 1), id).toBeLessThan(1e-5);
     }
   });
 
@@ -117,8 +118,11 @@ describe("reopening a form from a saved input", () => {
     ...FULL_SIZING_INPUT,
     overallEfficiency: 0.87,
     buckling: { endFixity: "fixed-fixed", exposedRodMm: 120, rodYieldMpa: 355 },
-    plate: { role: "bolster", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "A36" },
+    // The form's layout: crosshead as `plate` (solid), bolster as `plates[0]` (built-up)
+    plate: { role: "crosshead", spanMm: 350, widthMm: 200, thicknessMm: 60, grade: "A36" },
+    plates: [FULL_SIZING_INPUT.plates![1]!],
     columns: { count: 4, diameterMm: 40, grade: "S235JR" },
+    platen: { rodSpacingMm: 300, dieWidthMm: 100, widthMm: 250, thicknessMm: 60, grade: "S235JR" },
   };
 
   it.each(["metric", "imperial"] as const)("gives back the same SI input (%s)", (system) => {
@@ -127,7 +131,10 @@ describe("reopening a form from a saved input", () => {
     const back = check.input;
     expect(back.pump.kind).toBe("two-stage");
     expect(back.buckling?.endFixity).toBe("fixed-fixed");
-    expect(back.plate).toMatchObject({ role: "bolster", grade: "A36" });
+    expect(back.plate).toMatchObject({ role: "crosshead", grade: "A36" });
+    expect(back.plates?.[0]).toMatchObject({ role: "bolster", sectionModulusMm3: expect.any(Number) });
+    expect(back.platen?.grade).toBe("S235JR");
+    expect(back.throat?.grade).toBe("S355JR");
     expect(back.columns?.grade).toBe("S235JR");
     // Every number comes back; in imperial through 6 significant digits, so to that precision.
     const at = (input: SizingInput, path: string): unknown =>
@@ -139,6 +146,13 @@ describe("reopening a form from a saved input", () => {
       expect(typeof got, id).toBe("number");
       expect(Math.abs((got as number) / want - 1), id).toBeLessThan(1e-5);
     }
+  });
+
+  it("puts a bolster sent as the single `plate` into the bolster block", () => {
+    const form = formFromInput({ ...FULL, plate: { role: "bolster", spanMm: 300, widthMm: 200, thicknessMm: 40, grade: "A36" }, plates: undefined }, "metric");
+    expect(form.blocks.plate).toBe(false);
+    expect(form.blocks.bolster).toBe(true);
+    expect(form.values.bolsterWidthMm).toBe("200");
   });
 
   it("switches off blocks the input lacks and leaves absent optional fields blank", () => {
