@@ -92,7 +92,7 @@ export function CheckList({ checks }: { checks: readonly Check[] }) {
           ))}
         </ul>
       ) : (
-        <p className="text-sm text-ok">Every check passes for these inputs.</p>
+        <p className="text-sm text-ok">Every check that ran passes for these inputs.</p>
       )}
       {passing.length ? (
         <details className="group mt-3">

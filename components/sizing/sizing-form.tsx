@@ -70,7 +70,7 @@ function Group({ title, children, note }: { title: string; children: ReactNode; 
 
 const BLOCKS: { id: BlockId; title: string; note: string }[] = [
   { id: "lines", title: "Line sizes", note: "Oil velocity in each line against the recommended range." },
-  { id: "buckling", title: "Rod buckling", note: "Euler buckling of the rod and its direct stress at relief force." },
+  { id: "buckling", title: "Rod buckling", note: "Buckling of the rod (Johnson or Euler, whichever governs) and its direct stress at relief force." },
   { id: "ratings", title: "Component ratings", note: "Each rating against the relief setting; leave a part blank to skip it." },
   { id: "reservoir", title: "Reservoir", note: "Tank size against the pump-flow rule of thumb." },
   { id: "plate", title: "Crosshead", note: "Simply supported, loaded at mid-span: a solid plate or a built-up section." },
