@@ -40,10 +40,12 @@ export function formFromInput(input: SizingInput, system: UnitSystem): FormState
     columns: input.columns !== undefined,
     platen: input.platen !== undefined,
     throat: input.throat !== undefined,
+    die: (input.dies ?? []).length > 0,
   };
   const blockOf = (id: FieldId): BlockId | undefined => {
     const path = FIELDS[id].path;
     if (path.startsWith("plates.")) return "bolster";
+    if (path.startsWith("dies.")) return "die";
     const head = path.split(".")[0] as BlockId;
     return head in present ? head : undefined;
   };

@@ -8,7 +8,7 @@ import { formatInputValue, parseDisplayInput, parseNumberInput, type QuantityKin
 import { IMPERIAL_DEFAULTS } from "./imperial-defaults";
 
 export type FieldKind = QuantityKind | "count" | "percent";
-export type BlockId = "lines" | "buckling" | "ratings" | "reservoir" | "plate" | "bolster" | "columns" | "platen" | "throat";
+export type BlockId = "lines" | "buckling" | "ratings" | "reservoir" | "plate" | "bolster" | "columns" | "platen" | "throat" | "die";
 export type SectionMode = "solid" | "built-up";
 
 export interface FieldDef {
@@ -48,6 +48,7 @@ export const FIELDS = {
   cylinderBar: f("Cylinder rating", "pressure", "ratings.cylinderBar", 250),
   gaugeBar: f("Gauge full scale", "pressure", "ratings.gaugeBar", 400),
   volumeL: f("Tank volume", "volume", "reservoir.volumeL", 150),
+  usableL: f("Usable above the suction pickup (blank: half the tank)", "volume", "reservoir.usableL", ""),
   // The crosshead is sent as `plate`, the bolster as `plates[0]`, so each keeps one error path.
   plateSpanMm: f("Span between supports", "length", "plate.spanMm", 300),
   plateWidthMm: f("Plate width", "length", "plate.widthMm", 250),
@@ -69,6 +70,7 @@ export const FIELDS = {
   throatHeightMm: f("Back length between the jaws", "length", "throat.heightMm", 500),
   throatSectionDepthMm: f("Back section depth", "length", "throat.sectionDepthMm", 300),
   throatThicknessMm: f("Back plate thickness (total)", "length", "throat.thicknessMm", 50),
+  dieMaxForceKn: f("Die force limit", "force", "dies.0.maxForceKn", 200),
 } as const satisfies Record<string, FieldDef>;
 
 export type FieldId = keyof typeof FIELDS;
@@ -141,7 +143,7 @@ export function defaultForm(system: UnitSystem): FormState {
       throatGrade: grade,
     },
     // The frame starts half filled in, so a new design reads "incomplete" until it is checked.
-    blocks: { lines: true, buckling: true, ratings: true, reservoir: true, plate: true, bolster: false, columns: false, platen: false, throat: false },
+    blocks: { lines: true, buckling: true, ratings: true, reservoir: true, plate: true, bolster: false, columns: false, platen: false, throat: false, die: false },
   };
 }
 
@@ -196,7 +198,7 @@ export function rawInput(form: FormState): Record<string, unknown> {
   if (b.ratings) {
     raw.ratings = { hoseBar: n("hoseBar"), valveBar: n("valveBar"), pumpBar: n("pumpBar"), cylinderBar: n("cylinderBar"), gaugeBar: n("gaugeBar") };
   }
-  if (b.reservoir) raw.reservoir = { volumeL: n("volumeL") };
+  if (b.reservoir) raw.reservoir = { volumeL: n("volumeL"), usableL: n("usableL") };
   const plateOf = (role: "crosshead" | "bolster", key: "plate" | "bolster"): Record<string, unknown> => {
     const id = (suffix: string) => `${key}${suffix}` as FieldId;
     const section =
@@ -226,8 +228,12 @@ export function rawInput(form: FormState): Record<string, unknown> {
       grade: c.throatGrade,
     };
   }
+  // The page checks one die, under a fixed name; the API and press records take several.
+  if (b.die) raw.dies = [{ name: DIE_NAME, maxForceKn: n("dieMaxForceKn") }];
   return raw;
 }
+
+export const DIE_NAME = "Your die";
 
 /** Which field a schema path belongs to. */
 export const FIELD_BY_PATH: ReadonlyMap<string, FieldId> = new Map(FIELD_IDS.map((id) => [FIELDS[id].path, id]));

@@ -9,6 +9,8 @@ import type { FormErrors } from "./form-errors";
 import { FIELDS, type BlockId, type Choices, type FieldId, type FormState, type SectionMode } from "./form-model";
 
 const SECTION_MODES = ["solid", "built-up"] as const;
+/** Fields with a long label or hint take the whole row. */
+const WIDE_FIELDS: ReadonlySet<FieldId> = new Set(["rodYieldMpa", "usableL", "throatDepthMm"]);
 
 export type FormAction =
   | { type: "value"; id: FieldId; text: string }
@@ -78,6 +80,7 @@ const BLOCKS: { id: BlockId; title: string; note: string }[] = [
   { id: "columns", title: "Side columns or tie rods", note: "Tension in round columns or rods at relief force (closed frames)." },
   { id: "platen", title: "Platen between the rams", note: "The moving plate: pushed at the rods, held by the work over the die width." },
   { id: "throat", title: "Open (C) frame throat", note: "Tension plus bending in the back of an open frame, and how far the jaws open." },
+  { id: "die", title: "A die with its own force limit", note: "The maker's limit or your own calculation: the highest gauge reading that keeps within it." },
 ];
 
 const SECTION_FIELDS: Record<"plate" | "bolster", Record<SectionMode, FieldId[]>> = {
@@ -94,7 +97,7 @@ function blockFields(id: BlockId, c: Choices): FieldId[] {
     case "ratings":
       return ["hoseBar", "valveBar", "pumpBar", "cylinderBar", "gaugeBar"];
     case "reservoir":
-      return ["volumeL"];
+      return ["volumeL", "usableL"];
     case "plate":
       return ["plateSpanMm", "plateThicknessMm", ...SECTION_FIELDS.plate[c.plateSection]];
     case "bolster":
@@ -105,6 +108,8 @@ function blockFields(id: BlockId, c: Choices): FieldId[] {
       return ["platenRodSpacingMm", "platenDieWidthMm", "platenWidthMm", "platenThicknessMm"];
     case "throat":
       return ["throatDepthMm", "throatHeightMm", "throatSectionDepthMm", "throatThicknessMm"];
+    case "die":
+      return ["dieMaxForceKn"];
   }
 }
 
@@ -125,7 +130,7 @@ export function SizingForm({ form, errors, dispatch }: Props) {
         autoComplete="off"
         // A small intrinsic size lets the input shrink into a half-width column at 360 px.
         size={6}
-        className={id === "rodYieldMpa" ? "col-span-2 min-w-0" : "min-w-0"}
+        className={WIDE_FIELDS.has(id) ? "col-span-2 min-w-0" : "min-w-0"}
         value={form.values[id]}
         onChange={(e) => dispatch({ type: "value", id, text: e.target.value })}
         errors={error ? [error] : undefined}

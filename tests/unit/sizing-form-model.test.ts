@@ -105,6 +105,13 @@ describe("calculator form model", () => {
     expect(raw.plate).toBeDefined();
   });
 
+  it("sends the die block as one die with its limit, and the tank's usable volume when typed", () => {
+    const form = defaultForm("metric");
+    const raw = rawInput({ ...form, blocks: { ...form.blocks, die: true }, values: { ...form.values, usableL: "40" } });
+    expect(raw.dies).toEqual([{ name: "Your die", maxForceKn: 200 }]);
+    expect(raw.reservoir).toEqual({ volumeL: 150, usableL: 40 });
+  });
+
   it("applies SI values picked elsewhere in the form's units", () => {
     const form = applySi(defaultForm("imperial"), { boreMm: 127, pressureBar: 200 });
     expect(form.values.boreMm).toBe("5");

@@ -142,3 +142,20 @@ describe("incomplete is not ok", () => {
     expect(r.missing.length).toBeGreaterThan(0);
   });
 });
+
+describe("every number in a check message follows the user's unit system", () => {
+  it("imperial messages carry no metric unit, metric ones no imperial unit", () => {
+    const words = (system: "metric" | "imperial") =>
+      evaluateSizing({ ...FULL_SIZING_INPUT, reservoir: { volumeL: 150, usableL: 60 } }, { system }).checks.map((c) => c.message).join(" ");
+    const imperial = words("imperial");
+    expect(imperial).toMatch(/\d psi\b/);
+    expect(imperial).toMatch(/\d in\b/);
+    for (const metric of [/\d bar\b/, /\d mm\b/, /\d MPa\b/, /\d kN\b/, /\d L\b/, /\d kW\b/, /L\/min/, /m\/s\b/]) {
+      expect(imperial, String(metric)).not.toMatch(metric);
+    }
+    const metric = words("metric");
+    for (const imp of [/\d psi\b/, /\d in\b/, /\d ksi\b/, /US gal/, /\d hp\b/, /US tonf/, /ft\/s/]) {
+      expect(metric, String(imp)).not.toMatch(imp);
+    }
+  });
+});
