@@ -210,7 +210,12 @@ export function formatNumber(value: number, significant = 3): string {
     const decimals = Math.min(MAX_DECIMALS, Math.max(0, significant - 1 - magnitude));
     text = rounded.toFixed(decimals);
   }
-  if (/^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  const negative = text.charCodeAt(0) === 45; // "-"
+  if (negative && /^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  // Most figures have three integer digits or fewer: no grouping, no regex (the engine formats
+  // dozens of numbers per evaluation, and this is its hottest path).
+  const dot = text.indexOf(".");
+  if ((dot === -1 ? text.length : dot) - (negative ? 1 : 0) <= 3) return text;
   const [whole = "", fraction] = text.split(".");
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
   return fraction === undefined ? grouped : `${grouped}.${fraction}`;

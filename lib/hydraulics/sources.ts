@@ -39,5 +39,14 @@ export const FROM_FORMULA = "computed from the formula";
 
 /** "[HYT] hytec-hydraulik.com, nominal width; [HT] …" */
 export function cite(...keys: readonly SourceKey[]): string {
-  return keys.map((key) => `[${key}] ${SOURCES[key]}`).join("; ");
+  const memoKey = keys.join();
+  let text = CITED.get(memoKey);
+  if (text === undefined) {
+    text = keys.map((key) => `[${key}] ${SOURCES[key]}`).join("; ");
+    CITED.set(memoKey, text);
+  }
+  return text;
 }
+
+/** The same few citations are built on every evaluation; keep each once (a handful of entries). */
+const CITED = new Map<string, string>();
