@@ -13,6 +13,8 @@ export type DemoPress = {
   frameType: (typeof FRAME_TYPES)[number];
   lifecycle: (typeof LIFECYCLES)[number];
   boreMm: number;
+  /** Rams in parallel (default 1). */
+  cylinders?: number;
   strokeMm: number;
   daylightMm: number;
   bedWidthMm: number;
@@ -74,7 +76,8 @@ export const WORKSHOP_PRESSES: DemoPress[] = [
     name: "Four-post 60",
     frameType: "four-post",
     lifecycle: "building",
-    boreMm: 200,
+    boreMm: 140,
+    cylinders: 2,
     strokeMm: 300,
     daylightMm: 500,
     bedWidthMm: 450,
@@ -83,7 +86,7 @@ export const WORKSHOP_PRESSES: DemoPress[] = [
     reliefPressureBar: 210,
     hourMeter: 0,
     location: "Bay 2",
-    notes: "Damascus welding press under construction; tie rods on order.",
+    notes: "Damascus welding press under construction: two 140 mm rams under one platen; tie rods on order.",
   },
   {
     name: "Old splitter conversion",
@@ -121,6 +124,6 @@ export const BUILDER_PRESSES: DemoPress[] = [
 ];
 
 /** Cap-end area (mm²) × pressure (bar ⇒ 0.1 N/mm²) in kN. */
-export function ratedForceKn(boreMm: number, reliefBar: number): number {
-  return ((Math.PI * boreMm ** 2) / 4) * (reliefBar / 10) / 1000;
+export function ratedForceKn(boreMm: number, reliefBar: number, cylinders = 1): number {
+  return cylinders * ((Math.PI * boreMm ** 2) / 4) * (reliefBar / 10) / 1000;
 }

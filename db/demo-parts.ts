@@ -1,7 +1,8 @@
 /**
  * Parts of the demo presses — invented for the demo only, with plausible catalogue-like figures.
  * Garage press: its pressure hose is rated below the planned relief setting, so the as-built check
- * shows a builder what it catches before money is spent.
+ * shows a builder what it catches before money is spent. Four-post 60: two rams under one platen,
+ * and welding dies whose own limit sits below the press's force at relief (the gauge card says so).
  */
 import type { ComponentSpec } from "@/lib/validation/component-spec";
 
@@ -53,7 +54,10 @@ export const DEMO_PARTS: Record<string, DemoPart[]> = {
     { label: "Touchmark die", spec: { kind: "die", purpose: "Stamping the workshop's mark" }, installedOn: "2024-03-01" },
   ],
   "Four-post 60": [
-    { label: "Main cylinder", spec: { kind: "cylinder", boreMm: 200, rodMm: 100, strokeMm: 300, ratedPressureBar: 250, endFixity: "fixed-fixed", exposedRodMm: 60 }, costCents: 112000, purchased: true },
+    // Two rams side by side push one platen: the platen between them is the part most likely to bend.
+    ...[1, 2].map((n): DemoPart => ({ label: `Ram ${n}`, spec: { kind: "cylinder", boreMm: 140, rodMm: 70, strokeMm: 300, ratedPressureBar: 250, endFixity: "fixed-fixed", exposedRodMm: 60 }, costCents: 61000, purchased: true })),
+    { label: "Platen", spec: { kind: "platen", rodSpacingMm: 250, dieWidthMm: 100, widthMm: 400, thicknessMm: 60, grade: "S355JR" }, supplier: "Steel stockholder", costCents: 19500, purchased: true },
+    { label: "Welding dies", spec: { kind: "die", purpose: "Damascus billet welding, 100 mm flat", widthMm: 100, lengthMm: 200, maxForceKn: 450 }, costCents: 8000, purchased: false },
     { label: "Two-stage pump", spec: { kind: "pump", pumpKind: "two-stage", approachFlowLpm: 60, pressingFlowLpm: 12, unloadBar: 40, ratedPressureBar: 250 }, costCents: 38000, purchased: true },
     { label: "Motor", spec: { kind: "motor", powerKw: 7.5, speedRpm: 1450, supply: "three-phase" }, costCents: 41000, purchased: true },
     { label: "Relief valve", spec: { kind: "relief-valve", settingBar: 210, ratedPressureBar: 315 }, costCents: 5200, purchased: true },

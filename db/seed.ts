@@ -15,8 +15,8 @@ import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WOR
 import * as schema from "./schema";
 
 function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferInsert {
-  const { boreMm: bore, ...rest } = p;
-  return { id: newId(), shopId, ...rest, ratedForceKn: Math.round(ratedForceKn(bore, p.reliefPressureBar) * 10) / 10 };
+  const { boreMm: bore, cylinders, ...rest } = p;
+  return { id: newId(), shopId, ...rest, ratedForceKn: Math.round(ratedForceKn(bore, p.reliefPressureBar, cylinders) * 10) / 10 };
 }
 
 type Tx = Parameters<Parameters<ReturnType<typeof drizzle<typeof schema>>["transaction"]>[0]>[0];

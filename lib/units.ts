@@ -16,7 +16,10 @@ export type QuantityKind =
   | "fluidVelocity" // oil in a line, base m/s
   | "power"
   | "stress"
-  | "volume";
+  | "volume"
+  | "area" // section areas, base mm²
+  | "sectionModulus" // base mm³
+  | "inertia"; // second moment of area, base mm⁴
 
 // Exact definitions (hydraulics-reference.md §1 and §11).
 export const MM_PER_IN = 25.4; // international inch, exact
@@ -94,6 +97,18 @@ const UNITS = {
     gal: def("US gal", "US gallon", L_PER_US_GAL),
     in3: def("in³", "cubic inch", MM_PER_IN ** 3 / 1e6),
   },
+  area: {
+    mm2: def("mm²", "square millimetre", 1),
+    in2: def("in²", "square inch", MM_PER_IN ** 2),
+  },
+  sectionModulus: {
+    mm3: def("mm³", "cubic millimetre", 1),
+    in3: def("in³", "cubic inch", MM_PER_IN ** 3),
+  },
+  inertia: {
+    mm4: def("mm⁴", "millimetre to the fourth", 1),
+    in4: def("in⁴", "inch to the fourth", MM_PER_IN ** 4),
+  },
 } as const satisfies Record<QuantityKind, Record<string, UnitDef>>;
 
 export type UnitId<K extends QuantityKind> = keyof (typeof UNITS)[K] & string;
@@ -110,6 +125,9 @@ const DISPLAY: { readonly [S in UnitSystem]: { readonly [K in QuantityKind]: Uni
     power: "kW",
     stress: "MPa",
     volume: "L",
+    area: "mm2",
+    sectionModulus: "mm3",
+    inertia: "mm4",
   },
   imperial: {
     length: "in",
@@ -121,6 +139,9 @@ const DISPLAY: { readonly [S in UnitSystem]: { readonly [K in QuantityKind]: Uni
     power: "hp",
     stress: "ksi",
     volume: "gal",
+    area: "in2",
+    sectionModulus: "in3",
+    inertia: "in4",
   },
 };
 
@@ -189,7 +210,12 @@ export function formatNumber(value: number, significant = 3): string {
     const decimals = Math.min(MAX_DECIMALS, Math.max(0, significant - 1 - magnitude));
     text = rounded.toFixed(decimals);
   }
-  if (/^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  const negative = text.charCodeAt(0) === 45; // "-"
+  if (negative && /^-0(\.0*)?$/.test(text)) text = text.slice(1);
+  // Most figures have three integer digits or fewer: no grouping, no regex (the engine formats
+  // dozens of numbers per evaluation, and this is its hottest path).
+  const dot = text.indexOf(".");
+  if ((dot === -1 ? text.length : dot) - (negative ? 1 : 0) <= 3) return text;
   const [whole = "", fraction] = text.split(".");
   const grouped = whole.replace(/\B(?=(\d{3})+(?!\d))/g, ",");
   return fraction === undefined ? grouped : `${grouped}.${fraction}`;

@@ -1,4 +1,4 @@
-import { CheckList } from "@/components/sizing/check-list";
+import { CheckList, OverallVerdict } from "@/components/sizing/check-list";
 import type { AsBuilt } from "@/lib/press/as-built";
 import { formatQuantity, type QuantityKind, type UnitSystem } from "@/lib/units";
 
@@ -34,6 +34,7 @@ export function AsBuiltPanel({ asBuilt, units, motorKw }: { asBuilt: AsBuilt; un
           </div>
         ))}
       </dl>
+      <OverallVerdict overall={asBuilt.overall} missing={asBuilt.missingChecks} />
       <CheckList checks={asBuilt.checks} />
     </div>
   );

@@ -1,4 +1,4 @@
-import type { Check, CheckLevel } from "@/lib/hydraulics/types";
+import type { Check, CheckLevel, MissingCheck, OverallLevel } from "@/lib/hydraulics/types";
 
 const LEVELS: Record<CheckLevel, { label: string; box: string; badge: string }> = {
   fail: { label: "Fail", box: "bg-fail-soft ring-fail/30", badge: "bg-fail text-white" },
@@ -9,8 +9,17 @@ const LEVELS: Record<CheckLevel, { label: string; box: string; badge: string }> 
 const ORDER: Record<CheckLevel, number> = { fail: 0, warn: 1, ok: 2 };
 
 /** Shape and word carry the level too, so colour is never the only signal. */
-export function LevelIcon({ level }: { level: CheckLevel }) {
+export function LevelIcon({ level }: { level: OverallLevel }) {
   const common = { viewBox: "0 0 16 16", className: "h-4 w-4 shrink-0", "aria-hidden": true, fill: "none", stroke: "currentColor", strokeWidth: 2 } as const;
+  if (level === "incomplete") {
+    // A dashed circle with a question mark: "not known yet", distinct from the warning triangle.
+    return (
+      <svg {...common}>
+        <circle cx="8" cy="8" r="6.5" strokeDasharray="2.5 2" />
+        <path d="M6.2 6.3a1.9 1.9 0 1 1 2.6 1.8c-.5.2-.8.6-.8 1.1v.4M8 11.6v.4" strokeLinecap="round" />
+      </svg>
+    );
+  }
   if (level === "ok") {
     return (
       <svg {...common}>
@@ -83,7 +92,7 @@ export function CheckList({ checks }: { checks: readonly Check[] }) {
           ))}
         </ul>
       ) : (
-        <p className="text-sm text-ok">Every check passes for these inputs.</p>
+        <p className="text-sm text-ok">Every check that ran passes for these inputs.</p>
       )}
       {passing.length ? (
         <details className="group mt-3">
@@ -97,6 +106,41 @@ export function CheckList({ checks }: { checks: readonly Check[] }) {
             ))}
           </ul>
         </details>
+      ) : null}
+    </div>
+  );
+}
+
+const VERDICT: Record<OverallLevel, { word: string; box: string }> = {
+  ok: { word: "OK — every safety check ran and passes", box: "bg-ok-soft text-ok ring-ok/30" },
+  warn: { word: "Warnings — every safety check ran; read the warnings", box: "bg-warn-soft text-warn ring-warn/30" },
+  incomplete: { word: "Incomplete — not every safety check has run", box: "bg-steel-100 text-steel-800 ring-steel-400 border-dashed" },
+  fail: { word: "Fail — a check fails", box: "bg-fail-soft text-fail ring-fail/30" },
+};
+
+/**
+ * The design's verdict in words and an icon, with what is still missing: a design is never called
+ * ok while a check that makes a press safe has not run.
+ */
+export function OverallVerdict({ overall, missing }: { overall: OverallLevel; missing: readonly MissingCheck[] }) {
+  const v = VERDICT[overall];
+  return (
+    <div className={`mb-3 rounded-lg p-3 ring-1 ${v.box}`} data-overall={overall} data-testid="overall-verdict">
+      <p className="flex items-center gap-2 text-sm font-bold">
+        <LevelIcon level={overall} />
+        {v.word}
+      </p>
+      {missing.length > 0 ? (
+        <div className="mt-2 text-sm text-ink">
+          <p>Not checked yet — fill these in to complete the design:</p>
+          <ul className="mt-1 list-disc pl-5" data-testid="missing-checks">
+            {missing.map((m) => (
+              <li key={m.id} data-missing-id={m.id}>
+                {m.label}
+              </li>
+            ))}
+          </ul>
+        </div>
       ) : null}
     </div>
   );

@@ -8,7 +8,8 @@ import { formatInputValue, parseDisplayInput, parseNumberInput, type QuantityKin
 import { IMPERIAL_DEFAULTS } from "./imperial-defaults";
 
 export type FieldKind = QuantityKind | "count" | "percent";
-export type BlockId = "lines" | "buckling" | "ratings" | "reservoir" | "plate" | "columns";
+export type BlockId = "lines" | "buckling" | "ratings" | "reservoir" | "plate" | "bolster" | "columns" | "platen" | "throat" | "die";
+export type SectionMode = "solid" | "built-up";
 
 export interface FieldDef {
   label: string;
@@ -47,11 +48,29 @@ export const FIELDS = {
   cylinderBar: f("Cylinder rating", "pressure", "ratings.cylinderBar", 250),
   gaugeBar: f("Gauge full scale", "pressure", "ratings.gaugeBar", 400),
   volumeL: f("Tank volume", "volume", "reservoir.volumeL", 150),
+  usableL: f("Usable above the suction pickup (blank: half the tank)", "volume", "reservoir.usableL", ""),
+  // The crosshead is sent as `plate`, the bolster as `plates[0]`, so each keeps one error path.
   plateSpanMm: f("Span between supports", "length", "plate.spanMm", 300),
   plateWidthMm: f("Plate width", "length", "plate.widthMm", 250),
   plateThicknessMm: f("Plate thickness", "length", "plate.thicknessMm", 60),
+  plateModulusMm3: f("Section modulus", "sectionModulus", "plate.sectionModulusMm3", 400_000),
+  plateInertiaMm4: f("Second moment of area", "inertia", "plate.inertiaMm4", 40_000_000),
+  bolsterSpanMm: f("Span between supports", "length", "plates.0.spanMm", 300),
+  bolsterWidthMm: f("Plate width", "length", "plates.0.widthMm", 250),
+  bolsterThicknessMm: f("Plate thickness", "length", "plates.0.thicknessMm", 60),
+  bolsterModulusMm3: f("Section modulus", "sectionModulus", "plates.0.sectionModulusMm3", 400_000),
+  bolsterInertiaMm4: f("Second moment of area", "inertia", "plates.0.inertiaMm4", 40_000_000),
   columnsCount: f("Number of columns or tie rods", "count", "columns.count", 4),
   columnsDiameterMm: f("Diameter (threads: root diameter)", "length", "columns.diameterMm", 40),
+  platenRodSpacingMm: f("Rod spacing (centre to centre)", "length", "platen.rodSpacingMm", 300),
+  platenDieWidthMm: f("Die width", "length", "platen.dieWidthMm", 100),
+  platenWidthMm: f("Platen width", "length", "platen.widthMm", 250),
+  platenThicknessMm: f("Platen thickness", "length", "platen.thicknessMm", 60),
+  throatDepthMm: f("Throat depth (ram axis to the back's centre)", "length", "throat.depthMm", 200),
+  throatHeightMm: f("Back length between the jaws", "length", "throat.heightMm", 500),
+  throatSectionDepthMm: f("Back section depth", "length", "throat.sectionDepthMm", 300),
+  throatThicknessMm: f("Back plate thickness (total)", "length", "throat.thicknessMm", 50),
+  dieMaxForceKn: f("Die force limit", "force", "dies.0.maxForceKn", 200),
 } as const satisfies Record<string, FieldDef>;
 
 export type FieldId = keyof typeof FIELDS;
@@ -61,9 +80,13 @@ export const FIELD_IDS = Object.keys(FIELDS) as FieldId[];
 export interface Choices {
   pumpKind: "single" | "two-stage";
   endFixity: EndFixity;
-  plateRole: "crosshead" | "bolster";
   plateGrade: SteelGrade;
+  plateSection: SectionMode;
+  bolsterGrade: SteelGrade;
+  bolsterSection: SectionMode;
   columnsGrade: SteelGrade;
+  platenGrade: SteelGrade;
+  throatGrade: SteelGrade;
 }
 
 export interface FormState {
@@ -103,6 +126,7 @@ export function defaultForm(system: UnitSystem): FormState {
     const own = system === "imperial" ? IMPERIAL_DEFAULTS[id] : undefined;
     values[id] = own !== undefined ? String(own) : toText(FIELDS[id], FIELDS[id].initial, system);
   }
+  const grade: SteelGrade = system === "imperial" ? "A36" : "S355JR";
   return {
     system,
     pristine: true,
@@ -110,11 +134,16 @@ export function defaultForm(system: UnitSystem): FormState {
     choices: {
       pumpKind: "two-stage",
       endFixity: "fixed-pinned",
-      plateRole: "crosshead",
-      plateGrade: system === "imperial" ? "A36" : "S355JR",
-      columnsGrade: system === "imperial" ? "A36" : "S355JR",
+      plateGrade: grade,
+      plateSection: "solid",
+      bolsterGrade: grade,
+      bolsterSection: "solid",
+      columnsGrade: grade,
+      platenGrade: grade,
+      throatGrade: grade,
     },
-    blocks: { lines: true, buckling: true, ratings: true, reservoir: true, plate: true, columns: false },
+    // The frame starts half filled in, so a new design reads "incomplete" until it is checked.
+    blocks: { lines: true, buckling: true, ratings: true, reservoir: true, plate: true, bolster: false, columns: false, platen: false, throat: false, die: false },
   };
 }
 
@@ -169,19 +198,42 @@ export function rawInput(form: FormState): Record<string, unknown> {
   if (b.ratings) {
     raw.ratings = { hoseBar: n("hoseBar"), valveBar: n("valveBar"), pumpBar: n("pumpBar"), cylinderBar: n("cylinderBar"), gaugeBar: n("gaugeBar") };
   }
-  if (b.reservoir) raw.reservoir = { volumeL: n("volumeL") };
-  if (b.plate) {
-    raw.plate = {
-      role: c.plateRole,
-      spanMm: n("plateSpanMm"),
-      widthMm: n("plateWidthMm"),
-      thicknessMm: n("plateThicknessMm"),
-      grade: c.plateGrade,
+  if (b.reservoir) raw.reservoir = { volumeL: n("volumeL"), usableL: n("usableL") };
+  const plateOf = (role: "crosshead" | "bolster", key: "plate" | "bolster"): Record<string, unknown> => {
+    const id = (suffix: string) => `${key}${suffix}` as FieldId;
+    const section =
+      c[`${key}Section`] === "solid"
+        ? { widthMm: n(id("WidthMm")) }
+        : { sectionModulusMm3: n(id("ModulusMm3")), inertiaMm4: n(id("InertiaMm4")) };
+    return { role, spanMm: n(id("SpanMm")), thicknessMm: n(id("ThicknessMm")), grade: c[`${key}Grade`], ...section };
+  };
+  if (b.plate) raw.plate = plateOf("crosshead", "plate");
+  if (b.bolster) raw.plates = [plateOf("bolster", "bolster")];
+  if (b.columns) raw.columns = { count: n("columnsCount"), diameterMm: n("columnsDiameterMm"), grade: c.columnsGrade };
+  if (b.platen) {
+    raw.platen = {
+      rodSpacingMm: n("platenRodSpacingMm"),
+      dieWidthMm: n("platenDieWidthMm"),
+      widthMm: n("platenWidthMm"),
+      thicknessMm: n("platenThicknessMm"),
+      grade: c.platenGrade,
     };
   }
-  if (b.columns) raw.columns = { count: n("columnsCount"), diameterMm: n("columnsDiameterMm"), grade: c.columnsGrade };
+  if (b.throat) {
+    raw.throat = {
+      depthMm: n("throatDepthMm"),
+      heightMm: n("throatHeightMm"),
+      sectionDepthMm: n("throatSectionDepthMm"),
+      thicknessMm: n("throatThicknessMm"),
+      grade: c.throatGrade,
+    };
+  }
+  // The page checks one die, under a fixed name; the API and press records take several.
+  if (b.die) raw.dies = [{ name: DIE_NAME, maxForceKn: n("dieMaxForceKn") }];
   return raw;
 }
+
+export const DIE_NAME = "Your die";
 
 /** Which field a schema path belongs to. */
 export const FIELD_BY_PATH: ReadonlyMap<string, FieldId> = new Map(FIELD_IDS.map((id) => [FIELDS[id].path, id]));

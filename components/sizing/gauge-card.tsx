@@ -1,4 +1,4 @@
-import { gaugeTable, type GaugeRow } from "@/lib/hydraulics";
+import { circleAreaMm2, forceKn, gaugeTable, pressureForForceBar, type DieLimitInput, type GaugeRow } from "@/lib/hydraulics";
 import { displayUnit, formatNumber, toDisplay, type QuantityKind, type UnitSystem } from "@/lib/units";
 
 export interface GaugeCardProps {
@@ -6,6 +6,8 @@ export interface GaugeCardProps {
   cylinders: { count: number; boreMm: number };
   reliefBar: number;
   system: UnitSystem;
+  /** Dies with their own force limit: each gets its highest safe gauge reading on the card. */
+  dies?: readonly DieLimitInput[];
 }
 
 // Steps in the system's pressure unit; the first that keeps the card on one page is used.
@@ -102,6 +104,7 @@ export function GaugeCard(props: GaugeCardProps) {
           <Table key={i} rows={part} system={system} label={split.length > 1 ? `Gauge readings, part ${i + 1}` : "Gauge readings"} />
         ))}
       </div>
+      <DieLimits {...props} />
       <p className="mt-3 rounded bg-warn-soft p-2 text-sm font-semibold text-ink print:border print:border-ink print:bg-transparent">
         Caution: a force, not a promise. Never exceed the relief setting or the lowest component rating; keep hands out
         of the dies; never feel for a leak — oil under pressure injects through skin.
@@ -112,5 +115,36 @@ export function GaugeCard(props: GaugeCardProps) {
         tonne-force (1000 kgf); US ton = 2000 lbf.
       </p>
     </article>
+  );
+}
+
+/**
+ * For each die with its own limit, the highest gauge reading that keeps the force within it:
+ * p = F_max / total bore area. A die the press cannot overload at relief says so.
+ */
+function DieLimits({ dies, cylinders, reliefBar, system }: GaugeCardProps) {
+  if (!dies || dies.length === 0) return null;
+  const capMm2 = cylinders.count * circleAreaMm2(cylinders.boreMm);
+  const reliefKn = forceKn(reliefBar, capMm2);
+  return (
+    <ul className="mt-3 flex flex-col gap-1 rounded border-2 border-ink p-2 text-sm" aria-label="Die limits" data-testid="die-limits">
+      {dies.map((die) => {
+        const maxBar = pressureForForceBar(die.maxForceKn, capMm2);
+        const limit = plain("force", die.maxForceKn, system);
+        return (
+          <li key={die.name} data-die={die.name}>
+            {die.maxForceKn < reliefKn ? (
+              <>
+                <strong>With the {die.name}: never above {plain("pressure", maxBar, system)}</strong> on the gauge (die limit {limit}).
+              </>
+            ) : (
+              <>
+                {die.name}: limit {limit}, above the press&apos;s force at relief — the relief protects it.
+              </>
+            )}
+          </li>
+        );
+      })}
+    </ul>
   );
 }

@@ -3,7 +3,7 @@ import type { UnitSystem } from "@/lib/units";
 import { LevelIcon } from "./check-list";
 import { forceInThree } from "./format";
 
-const WORD = { ok: "all checks ok", warn: "warnings", fail: "a check fails" } as const;
+const WORD = { ok: "all checks ok", warn: "warnings", incomplete: "incomplete", fail: "a check fails" } as const;
 
 /**
  * On phones the results sit below a long form; this bar sticks to the bottom of the screen while
@@ -11,7 +11,7 @@ const WORD = { ok: "all checks ok", warn: "warnings", fail: "a check fails" } as
  */
 export function PhoneSummary({ result, system, stale }: { result: SizingResult; system: UnitSystem; stale: boolean }) {
   const [main] = forceInThree(result.forceKn, system);
-  const tone = { ok: "text-ok-soft", warn: "text-warn-soft", fail: "text-fail-soft" }[result.overall];
+  const tone = { ok: "text-ok-soft", warn: "text-warn-soft", incomplete: "text-steel-200", fail: "text-fail-soft" }[result.overall];
   return (
     <a
       href="#results"

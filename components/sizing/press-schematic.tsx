@@ -28,7 +28,43 @@ function Label({ y, lines, to }: { y: number; lines: string[]; to?: [number, num
   );
 }
 
-/** A front view of an H-frame press (not to scale), labelled with the computed figures. */
+export type FrameShape = "h-frame" | "four-post" | "c-frame";
+
+/** The frame the input describes: a throat means an open (C) frame, four or more columns a four-post. */
+export function frameShapeOf(input: SizingInput): FrameShape {
+  if (input.throat) return "c-frame";
+  return (input.columns?.count ?? 0) >= 4 ? "four-post" : "h-frame";
+}
+
+const FRAME_NAME: Record<FrameShape, string> = { "h-frame": "H-frame", "four-post": "four-post", "c-frame": "open (C) frame" };
+
+/** The frame's outline; the cylinders, platen and dies are drawn over it. */
+function Frame({ shape }: { shape: FrameShape }) {
+  if (shape === "c-frame") {
+    return (
+      <g fill="#e6eaee" stroke="#5c6e7d" strokeWidth="1.5" data-frame="c-frame">
+        <path d="M10 14 H170 V38 H40 V236 H170 V262 H10 Z" />
+      </g>
+    );
+  }
+  return (
+    <g fill="#e6eaee" stroke="#5c6e7d" strokeWidth="1.5" data-frame={shape}>
+      <rect x="10" y="14" width="160" height="24" rx="2" />
+      {shape === "four-post" ? (
+        // the two rear posts, seen between the front ones
+        <g fill="#cdd5dc" strokeDasharray="3 2">
+          <rect x="40" y="38" width="10" height="198" />
+          <rect x="130" y="38" width="10" height="198" />
+        </g>
+      ) : null}
+      <rect x="18" y="38" width="14" height="198" />
+      <rect x="148" y="38" width="14" height="198" />
+      <rect x="10" y="236" width="160" height="26" rx="2" />
+    </g>
+  );
+}
+
+/** A front view of the press (not to scale) following its frame and cylinder count, labelled with the computed figures. */
 export function PressSchematic({ input, result, system }: Props) {
   const q = (kind: Parameters<typeof formatQuantity>[0], value: number): string => formatQuantity(kind, value, system);
   const { count, boreMm, rodMm, strokeMm } = input.cylinders;
@@ -44,18 +80,13 @@ export function PressSchematic({ input, result, system }: Props) {
   const flows =
     pump.kind === "single" ? q("flow", pump.flowLpm) : `${flowNumber(pump.approachFlowLpm)} → ${flowNumber(pump.pressingFlowLpm)} ${flowUnit}`;
   const [main, ...others] = forceInThree(result.forceKn, system);
-  const summary = `Press schematic: ${count} cylinder${count > 1 ? "s" : ""} of ${q("length", boreMm)} bore, force ${main?.text ?? ""} at ${q("pressure", input.pressureBar)}.`;
+  const shape = frameShapeOf(input);
+  const summary = `Press schematic, ${FRAME_NAME[shape]}: ${count} cylinder${count > 1 ? "s" : ""} of ${q("length", boreMm)} bore, force ${main?.text ?? ""} at ${q("pressure", input.pressureBar)}.`;
 
   return (
     <svg viewBox="0 0 340 330" className="mx-auto h-auto w-full max-w-lg" role="img" aria-label={summary}>
       <title>{summary}</title>
-      {/* frame */}
-      <g fill="#e6eaee" stroke="#5c6e7d" strokeWidth="1.5">
-        <rect x="10" y="14" width="160" height="24" rx="2" />
-        <rect x="18" y="38" width="14" height="198" />
-        <rect x="148" y="38" width="14" height="198" />
-        <rect x="10" y="236" width="160" height="26" rx="2" />
-      </g>
+      <Frame shape={shape} />
       {/* cylinders, rods, moving platen and dies */}
       {Array.from({ length: drawn }, (_, i) => {
         const x = left + i * each + 3;

@@ -6,7 +6,7 @@ import { Card } from "@/components/ui/card";
 import { evaluateSizing, SizingInputError } from "@/lib/hydraulics";
 import type { SizingInput, SizingResult } from "@/lib/hydraulics/types";
 import type { UnitSystem } from "@/lib/units";
-import { CheckList } from "./check-list";
+import { CheckList, OverallVerdict } from "./check-list";
 import { checkForm } from "./form-errors";
 import { formFromInput } from "./form-from-input";
 import { applySi, convertForm, defaultForm, type FieldId, type FormState } from "./form-model";
@@ -139,6 +139,7 @@ export function SizingCalculator({
                 <PressSchematic input={shown.input} result={shownResult} system={system} />
               </Card>
               <Card title="Checks">
+                <OverallVerdict overall={shownResult.overall} missing={shownResult.missing} />
                 <CheckList checks={shownResult.checks} />
               </Card>
               <Card title="Plots">

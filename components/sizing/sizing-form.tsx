@@ -6,7 +6,11 @@ import { DEFAULT_ROD_YIELD_MPA } from "@/lib/hydraulics/buckling";
 import { displayUnit, formatQuantity, type UnitSystem } from "@/lib/units";
 import { END_FIXITIES, STEEL_GRADES } from "@/lib/validation/sizing";
 import type { FormErrors } from "./form-errors";
-import { FIELDS, type BlockId, type Choices, type FieldId, type FormState } from "./form-model";
+import { FIELDS, type BlockId, type Choices, type FieldId, type FormState, type SectionMode } from "./form-model";
+
+const SECTION_MODES = ["solid", "built-up"] as const;
+/** Fields with a long label or hint take the whole row. */
+const WIDE_FIELDS: ReadonlySet<FieldId> = new Set(["rodYieldMpa", "usableL", "throatDepthMm"]);
 
 export type FormAction =
   | { type: "value"; id: FieldId; text: string }
@@ -68,21 +72,48 @@ function Group({ title, children, note }: { title: string; children: ReactNode; 
 
 const BLOCKS: { id: BlockId; title: string; note: string }[] = [
   { id: "lines", title: "Line sizes", note: "Oil velocity in each line against the recommended range." },
-  { id: "buckling", title: "Rod buckling", note: "Euler buckling of the rod and its direct stress at relief force." },
+  { id: "buckling", title: "Rod buckling", note: "Buckling of the rod (Johnson or Euler, whichever governs) and its direct stress at relief force." },
   { id: "ratings", title: "Component ratings", note: "Each rating against the relief setting; leave a part blank to skip it." },
   { id: "reservoir", title: "Reservoir", note: "Tank size against the pump-flow rule of thumb." },
-  { id: "plate", title: "Crosshead or bolster plate", note: "A solid plate, simply supported, loaded at mid-span." },
-  { id: "columns", title: "Side columns or tie rods", note: "Tension in round columns or rods at relief force." },
+  { id: "plate", title: "Crosshead", note: "Simply supported, loaded at mid-span: a solid plate or a built-up section." },
+  { id: "bolster", title: "Bolster", note: "Simply supported, loaded at mid-span: a solid plate or a built-up section." },
+  { id: "columns", title: "Side columns or tie rods", note: "Tension in round columns or rods at relief force (closed frames)." },
+  { id: "platen", title: "Platen between the rams", note: "The moving plate: pushed at the rods, held by the work over the die width." },
+  { id: "throat", title: "Open (C) frame throat", note: "Tension plus bending in the back of an open frame, and how far the jaws open." },
+  { id: "die", title: "A die with its own force limit", note: "The maker's limit or your own calculation: the highest gauge reading that keeps within it." },
 ];
 
-const BLOCK_FIELDS: Record<BlockId, FieldId[]> = {
-  lines: ["suctionIdMm", "pressureIdMm", "returnIdMm"],
-  buckling: ["exposedRodMm", "rodYieldMpa"],
-  ratings: ["hoseBar", "valveBar", "pumpBar", "cylinderBar", "gaugeBar"],
-  reservoir: ["volumeL"],
-  plate: ["plateSpanMm", "plateWidthMm", "plateThicknessMm"],
-  columns: ["columnsCount", "columnsDiameterMm"],
+const SECTION_FIELDS: Record<"plate" | "bolster", Record<SectionMode, FieldId[]>> = {
+  plate: { solid: ["plateWidthMm"], "built-up": ["plateModulusMm3", "plateInertiaMm4"] },
+  bolster: { solid: ["bolsterWidthMm"], "built-up": ["bolsterModulusMm3", "bolsterInertiaMm4"] },
 };
+
+function blockFields(id: BlockId, c: Choices): FieldId[] {
+  switch (id) {
+    case "lines":
+      return ["suctionIdMm", "pressureIdMm", "returnIdMm"];
+    case "buckling":
+      return ["exposedRodMm", "rodYieldMpa"];
+    case "ratings":
+      return ["hoseBar", "valveBar", "pumpBar", "cylinderBar", "gaugeBar"];
+    case "reservoir":
+      return ["volumeL", "usableL"];
+    case "plate":
+      return ["plateSpanMm", "plateThicknessMm", ...SECTION_FIELDS.plate[c.plateSection]];
+    case "bolster":
+      return ["bolsterSpanMm", "bolsterThicknessMm", ...SECTION_FIELDS.bolster[c.bolsterSection]];
+    case "columns":
+      return ["columnsCount", "columnsDiameterMm"];
+    case "platen":
+      return ["platenRodSpacingMm", "platenDieWidthMm", "platenWidthMm", "platenThicknessMm"];
+    case "throat":
+      return ["throatDepthMm", "throatHeightMm", "throatSectionDepthMm", "throatThicknessMm"];
+    case "die":
+      return ["dieMaxForceKn"];
+  }
+}
+
+const SECTION_LABELS: Record<SectionMode, string> = { solid: "Solid plate (width × thickness)", "built-up": "Built-up section (S and I)" };
 
 /** Every input of the calculator, typed in the display units of the form's system. */
 export function SizingForm({ form, errors, dispatch }: Props) {
@@ -99,7 +130,7 @@ export function SizingForm({ form, errors, dispatch }: Props) {
         autoComplete="off"
         // A small intrinsic size lets the input shrink into a half-width column at 360 px.
         size={6}
-        className={id === "rodYieldMpa" ? "col-span-2 min-w-0" : "min-w-0"}
+        className={WIDE_FIELDS.has(id) ? "col-span-2 min-w-0" : "min-w-0"}
         value={form.values[id]}
         onChange={(e) => dispatch({ type: "value", id, text: e.target.value })}
         errors={error ? [error] : undefined}
@@ -116,10 +147,18 @@ export function SizingForm({ form, errors, dispatch }: Props) {
     ),
     plate: (
       <>
-        <Select id="sizing-plateRole" label="Plate" value={c.plateRole} options={["crosshead", "bolster"] as const} onChange={(plateRole) => choose({ plateRole })} />
+        <Select wide id="sizing-plateSection" label="Section" value={c.plateSection} options={SECTION_MODES} labels={SECTION_LABELS} onChange={(plateSection) => choose({ plateSection })} />
         <Select id="sizing-plateGrade" label="Steel grade" value={c.plateGrade} options={STEEL_GRADES} onChange={(plateGrade) => choose({ plateGrade })} />
       </>
     ),
+    bolster: (
+      <>
+        <Select wide id="sizing-bolsterSection" label="Section" value={c.bolsterSection} options={SECTION_MODES} labels={SECTION_LABELS} onChange={(bolsterSection) => choose({ bolsterSection })} />
+        <Select id="sizing-bolsterGrade" label="Steel grade" value={c.bolsterGrade} options={STEEL_GRADES} onChange={(bolsterGrade) => choose({ bolsterGrade })} />
+      </>
+    ),
+    platen: <Select id="sizing-platenGrade" label="Steel grade" value={c.platenGrade} options={STEEL_GRADES} onChange={(platenGrade) => choose({ platenGrade })} />,
+    throat: <Select id="sizing-throatGrade" label="Steel grade" value={c.throatGrade} options={STEEL_GRADES} onChange={(throatGrade) => choose({ throatGrade })} />,
     columns: (
       <Select id="sizing-columnsGrade" label="Steel grade" value={c.columnsGrade} options={STEEL_GRADES} onChange={(columnsGrade) => choose({ columnsGrade })} />
     ),
@@ -158,7 +197,7 @@ export function SizingForm({ form, errors, dispatch }: Props) {
           {form.blocks[block.id] ? (
             <div className="mt-3 grid grid-cols-2 items-end gap-3">
               {extras[block.id]}
-              {BLOCK_FIELDS[block.id].map(input)}
+              {blockFields(block.id, c).map(input)}
             </div>
           ) : null}
         </fieldset>

@@ -9,6 +9,7 @@ export const COMPONENT_KINDS = [
   "frame-member",
   "crosshead",
   "bolster",
+  "platen",
   "cylinder",
   "pump",
   "motor",

@@ -4,7 +4,7 @@
  */
 import { formatNumber, formatQuantity, toDisplay, type QuantityKind, type UnitSystem } from "@/lib/units";
 import { COMMON_PRACTICE, cite } from "./sources";
-import type { Check, CheckLevel, PumpInput } from "./types";
+import type { Check, CheckLevel, MissingCheck, OverallLevel, PumpInput } from "./types";
 
 /** Formats base-unit values in the user's units for check messages. */
 export interface Fmt {
@@ -32,6 +32,13 @@ export function worstLevel(checks: readonly Check[]): CheckLevel {
   return worst;
 }
 
+/** Any fail wins; then anything missing makes the design "incomplete"; then the worst level. */
+export function overallLevel(checks: readonly Check[], missing: readonly MissingCheck[]): OverallLevel {
+  const worst = worstLevel(checks);
+  if (worst === "fail") return "fail";
+  return missing.length > 0 ? "incomplete" : worst;
+}
+
 /** ok at or above `okAt`, fail below `failBelow`, warn between. */
 export function levelForFactor(factor: number, okAt: number, failBelow: number): CheckLevel {
   if (factor >= okAt) return "ok";
@@ -51,17 +58,30 @@ export interface SanityContext {
   efficiency: number;
   pump: PumpInput;
   cylinderCount: number;
+  /** False when no relief setting was given and the working pressure was assumed. */
+  reliefGiven: boolean;
 }
 
 export function sanityChecks(ctx: SanityContext, fmt: Fmt): Check[] {
   const checks = [reliefCheck(ctx, fmt), efficiencyCheck(ctx.efficiency)];
-  if (ctx.pump.kind === "two-stage") checks.push(unloadCheck(ctx.pump.unloadBar, ctx.reliefBar, fmt));
+  if (ctx.pump.kind === "two-stage") checks.push(unloadCheck(ctx.pump.unloadBar, ctx.pressureBar, ctx.reliefBar, fmt));
   if (ctx.cylinderCount > 1) checks.push(parallelNote(ctx.cylinderCount));
   return checks;
 }
 
-function reliefCheck({ pressureBar, reliefBar }: SanityContext, fmt: Fmt): Check {
+export const RELIEF_ASSUMED = "Relief setting not given: the working pressure was assumed as the relief setting.";
+
+function reliefCheck({ pressureBar, reliefBar, reliefGiven }: SanityContext, fmt: Fmt): Check {
   const rule = "The relief valve is set at or above the working pressure and below the lowest-rated component.";
+  if (!reliefGiven) {
+    return makeCheck(
+      "relief-vs-working",
+      "warn",
+      `No relief setting given: ${fmt("pressure", pressureBar)} (the working pressure) is assumed. Enter the relief valve's real setting — every rating and frame figure depends on it.`,
+      rule,
+      COMMON_PRACTICE,
+    );
+  }
   const below = reliefBar < pressureBar;
   const message = below
     ? `Relief setting ${fmt("pressure", reliefBar)} is below the working pressure ${fmt("pressure", pressureBar)}: the press can never reach its working pressure.`
@@ -85,14 +105,19 @@ function efficiencyCheck(efficiency: number): Check {
   );
 }
 
-function unloadCheck(unloadBar: number, reliefBar: number, fmt: Fmt): Check {
-  const never = unloadBar >= reliefBar;
-  const message = never
-    ? `Unloading pressure ${fmt("pressure", unloadBar)} is at or above the relief ${fmt("pressure", reliefBar)}: the large section never unloads, so the motor must drive the total flow at relief.`
-    : `Large section unloads at ${fmt("pressure", unloadBar)}, below the relief ${fmt("pressure", reliefBar)}.`;
+function unloadCheck(unloadBar: number, pressureBar: number, reliefBar: number, fmt: Fmt): Check {
+  const head = `Unloading pressure ${fmt("pressure", unloadBar)}`;
+  let level: CheckLevel = "ok";
+  let message = `Large section unloads at ${fmt("pressure", unloadBar)}, below the working pressure ${fmt("pressure", pressureBar)}.`;
+  if (unloadBar >= reliefBar) {
+    level = "warn";
+    message = `${head} is at or above the relief ${fmt("pressure", reliefBar)}: the large section never unloads, so pressing speed, pressing power and the motor all follow the total flow.`;
+  } else if (unloadBar > pressureBar) {
+    message = `${head} is above the working pressure ${fmt("pressure", pressureBar)}: the press works at the total flow and unloads only when it stalls towards relief.`;
+  }
   return makeCheck(
     "unload-vs-relief",
-    never ? "warn" : "ok",
+    level,
     message,
     "Both sections feed the cylinder until the unloading setting; above it only the small section pumps.",
     cite("HP", "CD"),

@@ -8,7 +8,7 @@ import { makeCheck, formatFactor, type Fmt } from "./checks";
 import { circleAreaMm2 } from "./force";
 import { COMMON_PRACTICE, cite } from "./sources";
 import { STEEL_E_N_MM2, STEEL_SOURCE_KEYS, YIELD_TABLE_MAX_THICKNESS_MM, yieldStrength } from "./steel";
-import type { Check, ColumnsInput, ColumnsResult, PlateInput, PlateResult, SteelGrade } from "./types";
+import type { BuiltUpSection, Check, ColumnsInput, ColumnsResult, PlateInput, PlateResult, SolidSection, SteelGrade } from "./types";
 
 export const FRAME_MIN_SAFETY_FACTOR = 2;
 
@@ -21,7 +21,7 @@ export interface Section {
 }
 
 /** A solid plate loaded flat: S = b·t²/6, I = b·t³/12; a built-up section brings its own. */
-export function plateSection(plate: PlateInput): Section {
+export function plateSection(plate: { thicknessMm: number } & (SolidSection | BuiltUpSection)): Section {
   if (plate.widthMm === undefined) {
     return { sectionModulusMm3: plate.sectionModulusMm3, inertiaMm4: plate.inertiaMm4 };
   }
@@ -70,14 +70,14 @@ export function evaluateColumns(columns: ColumnsInput, forceKn: number): Columns
   return { loadPerColumnKn, stressMpa, yieldMpa, safetyFactor: yieldMpa / stressMpa, yieldTableCovers: covered };
 }
 
-interface StrengthFigures {
+export interface StrengthFigures {
   stressMpa: number;
   yieldMpa: number;
   safetyFactor: number;
   yieldTableCovers: boolean;
 }
 
-function strengthCheck(id: string, what: string, figures: StrengthFigures, grade: SteelGrade, fmt: Fmt): Check {
+export function strengthCheck(id: string, what: string, figures: StrengthFigures, grade: SteelGrade, fmt: Fmt): Check {
   const factor = formatFactor(figures.safetyFactor);
   const head = `${what}: ${fmt("stress", figures.stressMpa)} at relief force against ${grade} yield ${fmt("stress", figures.yieldMpa)}, factor ${factor}`;
   let level: Check["level"] = "ok";

@@ -1,19 +1,24 @@
 /**
  * The sizing engine: one call runs the whole circuit — force, speeds, cycle, power, motor, and
- * each optional block (lines, rod buckling, ratings, reservoir, plate, columns) with its checks.
+ * each optional block (lines, rod buckling, ratings, reservoir, plates, columns, platen, throat,
+ * dies) with its checks, and lists the safety checks that could not run (`missing`).
  * Pure TypeScript, SI-based units inside; the UI and the API call the same function.
  */
 import type { UnitSystem } from "@/lib/units";
 import { bucklingChecks, evaluateBuckling } from "./buckling";
-import { makeFormatter, sanityChecks, worstLevel, type Fmt } from "./checks";
+import { makeFormatter, overallLevel, RELIEF_ASSUMED, sanityChecks, type Fmt } from "./checks";
+import { missingChecks } from "./completeness";
+import { dieChecks, evaluateDies } from "./dies";
 import { forceInTons, forceKn, cylinderAreas } from "./force";
 import { columnsCheck, evaluateColumns, evaluatePlate, plateCheck } from "./frame";
 import { ratingChecks } from "./hoses";
 import { lineChecks, lineFlows, lineVelocities } from "./lines";
 import { DEFAULT_EFFICIENCY, motorCheck, motorLimits, stagePowers } from "./power";
-import { evaluateReservoir, reservoirCheck } from "./reservoir";
+import { platenCheck, evaluatePlaten } from "./platen";
+import { drawdownL, evaluateReservoir, reservoirChecks } from "./reservoir";
+import { evaluateThroat, throatCheck } from "./throat";
 import { cycleTimeS, pumpFlows, ramSpeeds, type PumpFlows } from "./speed";
-import type { Check, SizingInput, SizingResult } from "./types";
+import type { Check, PlateInput, SizingInput, SizingResult } from "./types";
 import { SizingInputError, findInputProblems } from "./validate";
 
 export interface EvaluateOptions {
@@ -34,7 +39,7 @@ export function evaluateSizing(input: SizingInput, options: EvaluateOptions = {}
   const reliefBar = input.reliefBar ?? input.pressureBar;
   const { cylinders, pump } = input;
   const { capMm2, annulusMm2 } = cylinderAreas(cylinders);
-  const flows = pumpFlows(pump);
+  const flows = pumpFlows(pump, input.pressureBar, reliefBar);
   const speeds = ramSpeeds(flows, capMm2, annulusMm2);
   const powers = stagePowers(pump, flows, reliefBar, efficiency);
   const force = forceInTons(forceKn(input.pressureBar, capMm2));
@@ -61,19 +66,57 @@ export function evaluateSizing(input: SizingInput, options: EvaluateOptions = {}
     }),
     ...(input.motorKw !== undefined && motorLimits(input.motorKw, pump, flows, efficiency)),
     checks: [],
+    missing: [],
+    assumptions: input.reliefBar === undefined ? [RELIEF_ASSUMED] : [],
     overall: "ok",
   };
 
   const checks: Check[] = sanityChecks(
-    { pressureBar: input.pressureBar, reliefBar, efficiency, pump, cylinderCount: cylinders.count },
+    { pressureBar: input.pressureBar, reliefBar, efficiency, pump, cylinderCount: cylinders.count, reliefGiven: input.reliefBar !== undefined },
     fmt,
   );
   if (input.motorKw !== undefined) checks.push(motorCheck(input.motorKw, powers, fmt));
   checks.push(...optionalBlocks(input, result, flows, fmt));
+  checks.push(...frameBlocks(input, result, fmt));
 
   result.checks = checks;
-  result.overall = worstLevel(checks);
+  result.missing = missingChecks(input, new Set(allPlates(input).map((p) => p.role)));
+  result.overall = overallLevel(checks, result.missing);
   return result;
+}
+
+/** The single `plate` of older callers and the `plates` list, as one list. */
+export function allPlates(input: Pick<SizingInput, "plate" | "plates">): PlateInput[] {
+  return [...(input.plate ? [input.plate] : []), ...(input.plates ?? [])];
+}
+
+/** Plates, columns, platen, throat and dies: every member loaded by the force at relief. */
+function frameBlocks(input: SizingInput, result: SizingResult, fmt: Fmt): Check[] {
+  const checks: Check[] = [];
+  const force = result.reliefForceKn;
+  const plates = allPlates(input);
+  if (plates.length > 0) {
+    result.plates = plates.map((plate) => evaluatePlate(plate, force));
+    result.plate = result.plates[0];
+    plates.forEach((plate, i) => checks.push(plateCheck(plate, result.plates![i]!, fmt)));
+  }
+  if (input.columns) {
+    result.columns = evaluateColumns(input.columns, force);
+    checks.push(columnsCheck(input.columns, result.columns, fmt));
+  }
+  if (input.platen) {
+    result.platen = evaluatePlaten(input.platen, input.cylinders.count, force);
+    checks.push(platenCheck(input.platen, input.cylinders.count, result.platen, fmt));
+  }
+  if (input.throat) {
+    result.throat = evaluateThroat(input.throat, force);
+    checks.push(throatCheck(input.throat, result.throat, fmt));
+  }
+  if (input.dies && input.dies.length > 0) {
+    result.dies = evaluateDies(input.dies, result.capAreaMm2, force);
+    checks.push(...dieChecks(result.dies, force, fmt));
+  }
+  return checks;
 }
 
 /** Fills the optional parts of `result` and returns their checks. */
@@ -91,18 +134,13 @@ function optionalBlocks(input: SizingInput, result: SizingResult, flows: PumpFlo
     result.buckling = evaluateBuckling(cylinders.rodMm, cylinders.strokeMm, input.buckling, loadPerRodKn);
     checks.push(...bucklingChecks(result.buckling, input.buckling, fmt));
   }
-  if (input.ratings) checks.push(...ratingChecks(input.ratings, result.reliefBar, fmt));
+  if (input.ratings) {
+    checks.push(...ratingChecks(input.ratings, result.reliefBar, result.capAreaMm2 / result.annulusAreaMm2, fmt));
+  }
   if (input.reservoir) {
-    result.reservoir = evaluateReservoir(input.reservoir.volumeL, flows.approachLpm);
-    checks.push(reservoirCheck(result.reservoir, fmt));
-  }
-  if (input.plate) {
-    result.plate = evaluatePlate(input.plate, result.reliefForceKn);
-    checks.push(plateCheck(input.plate, result.plate, fmt));
-  }
-  if (input.columns) {
-    result.columns = evaluateColumns(input.columns, result.reliefForceKn);
-    checks.push(columnsCheck(input.columns, result.columns, fmt));
+    const drawL = drawdownL(result.capAreaMm2, result.annulusAreaMm2, cylinders.strokeMm);
+    result.reservoir = evaluateReservoir(input.reservoir, flows.approachLpm, drawL);
+    checks.push(...reservoirChecks(result.reservoir, fmt));
   }
   return checks;
 }
@@ -125,8 +163,11 @@ export { circleAreaMm2, annulusAreaMm2, forceKn, pressureForForceBar, areaForFor
 export { speedMmS, flowLpmForSpeed, sweptVolumeL, cycleSplitS, type CycleSplit } from "./speed";
 export { hydraulicPowerKw, motorInputKw, maxPressureForMotorBar, DEFAULT_EFFICIENCY } from "./power";
 export { lineVelocityMS, lineIdForVelocityMm, LINE_RANGES_MS } from "./lines";
-export { END_FIXITY_K } from "./buckling";
+export { END_FIXITY_K, THEORETICAL_K, transitionSlenderness, johnsonStressMpa } from "./buckling";
+export { platenBeam } from "./platen";
+export { throatSection } from "./throat";
+export { intensifiedBar, RELIEF_OVERRIDE_FRACTION, GAUGE_MAX_READING_FRACTION } from "./hoses";
 export { yieldStrength, STEEL_E_N_MM2 } from "./steel";
 export { minimumBurstBar, assemblyRatingBar, typicalHoseWorkingBar, type HoseType, type DashSize } from "./hoses";
-export { recommendedOilL, recommendedTankL } from "./reservoir";
+export { recommendedOilL, recommendedTankL, drawdownL } from "./reservoir";
 export { SOURCES, COMMON_PRACTICE } from "./sources";

@@ -34,15 +34,16 @@ export interface StagePowers {
 
 /**
  * The pump reaches the relief setting whenever the ram stalls, so each stage is taken at the
- * highest pressure it can see: the approach stage at the unloading setting (two-stage; capped by
- * relief) or at relief (single pump: one stage, so both figures match); the pressing stage at relief.
- * The motor covers the larger stage: max(Q_total·p_unload, Q_small·p_relief) / η. A tie (and
- * every single pump) reports "pressing".
+ * highest pressure it can see: the approach stage (total flow) at the unloading setting, capped by
+ * relief (two-stage) or at relief (single pump: one stage, so both figures match); the pressing
+ * stage at relief with the flow that reaches it — the small section, or the total when the large
+ * section never unloads. The motor covers the larger stage: max(Q_total·p_unload, Q_relief·p_relief) / η.
+ * A tie (and every single pump) reports "pressing".
  */
 export function stagePowers(pump: PumpInput, flows: PumpFlows, reliefBar: number, efficiency: number): StagePowers {
   const approachTopBar = pump.kind === "two-stage" ? Math.min(pump.unloadBar, reliefBar) : reliefBar;
   const approachKw = hydraulicPowerKw(approachTopBar, flows.approachLpm);
-  const pressingKw = hydraulicPowerKw(reliefBar, flows.pressingLpm);
+  const pressingKw = hydraulicPowerKw(reliefBar, flows.reliefLpm);
   const governingStage = approachKw > pressingKw ? "approach" : "pressing";
   return {
     approachKw,
@@ -57,14 +58,19 @@ export interface MotorLimits {
   maxUnloadForMotorBar?: number;
 }
 
+/**
+ * The highest pressure the motor can hold. With a two-stage pump the motor must first push the
+ * total flow up to the unloading setting: if it stalls before that, or the large section never
+ * unloads, the total flow sets the limit; otherwise the small section's flow does.
+ */
 export function motorLimits(motorKw: number, pump: PumpInput, flows: PumpFlows, efficiency: number): MotorLimits {
-  const limits: MotorLimits = {
-    maxPressureForMotorBar: maxPressureForMotorBar(motorKw, flows.pressingLpm, efficiency),
+  if (pump.kind === "single") return { maxPressureForMotorBar: maxPressureForMotorBar(motorKw, flows.reliefLpm, efficiency) };
+  const atTotal = maxPressureForMotorBar(motorKw, flows.approachLpm, efficiency);
+  const reachesUnload = flows.largeUnloads && atTotal >= pump.unloadBar;
+  return {
+    maxPressureForMotorBar: reachesUnload ? maxPressureForMotorBar(motorKw, pump.pressingFlowLpm, efficiency) : atTotal,
+    maxUnloadForMotorBar: atTotal,
   };
-  if (pump.kind === "two-stage") {
-    limits.maxUnloadForMotorBar = maxPressureForMotorBar(motorKw, flows.approachLpm, efficiency);
-  }
-  return limits;
 }
 
 export function motorCheck(motorKw: number, powers: StagePowers, fmt: Fmt): Check {
@@ -77,7 +83,7 @@ export function motorCheck(motorKw: number, powers: StagePowers, fmt: Fmt): Chec
     "motor-power",
     short ? "fail" : "ok",
     message,
-    "Motor power ≥ the larger of (approach flow × unloading pressure) and (pressing flow × relief), divided by overall efficiency.",
+    "Motor power ≥ the larger of (total flow × unloading pressure) and (flow reaching relief × relief), divided by overall efficiency; the flow reaching relief is the total when the large section never unloads.",
     `${cite("HO", "ETB", "HP")}; two-stage maximum ${FROM_FORMULA}`,
   );
 }

@@ -25,6 +25,11 @@ export const SOURCES = {
   EN: "readle.co.uk, steel grades (EN 10025)",
   ITI: "itidirect.co.uk, ram gauges",
   TF: "Wikipedia, Ton-force",
+  JOH: "Wikipedia, Johnson's parabolic formula",
+  PLY: "University of Plymouth design notes, buckling load calculator (D. J. Grieve, 1999)",
+  AISC: "AISC 360-22 Commentary, Table C-A-7.1, recommended design values of K",
+  CSG: "control-specialties.com, pressure gauges (reading at 50–75 % of full scale)",
+  B40: "ASME B40.100 (accuracy grades over the middle half of the scale)",
 } as const;
 
 export type SourceKey = keyof typeof SOURCES;
@@ -34,5 +39,14 @@ export const FROM_FORMULA = "computed from the formula";
 
 /** "[HYT] hytec-hydraulik.com, nominal width; [HT] …" */
 export function cite(...keys: readonly SourceKey[]): string {
-  return keys.map((key) => `[${key}] ${SOURCES[key]}`).join("; ");
+  const memoKey = keys.join();
+  let text = CITED.get(memoKey);
+  if (text === undefined) {
+    text = keys.map((key) => `[${key}] ${SOURCES[key]}`).join("; ");
+    CITED.set(memoKey, text);
+  }
+  return text;
 }
+
+/** The same few citations are built on every evaluation; keep each once (a handful of entries). */
+const CITED = new Map<string, string>();

@@ -24,14 +24,33 @@ export function sweptVolumeL(areaMm2: number, lengthMm: number): number {
 export interface PumpFlows {
   /** Flow while pressure is below the unloading setting (both sections of a two-stage pump). */
   approachLpm: number;
-  /** Flow above the unloading setting (the small section alone); equals approach for a single pump. */
+  /**
+   * Flow while pressing at the working pressure: the small section alone once the large one has
+   * unloaded; the total when the unloading setting is above the working pressure or at/above relief.
+   */
   pressingLpm: number;
+  /** Flow against the relief setting: the total when the large section never unloads. */
+  reliefLpm: number;
+  /** Two-stage only: false when the unloading setting is at or above relief, so it never unloads. */
+  largeUnloads: boolean;
 }
 
-export function pumpFlows(pump: PumpInput): PumpFlows {
-  return pump.kind === "single"
-    ? { approachLpm: pump.flowLpm, pressingLpm: pump.flowLpm }
-    : { approachLpm: pump.approachFlowLpm, pressingLpm: pump.pressingFlowLpm };
+/**
+ * Both sections feed the cylinder until the unloading setting; above it only the small one pumps
+ * [HP, CD]. A setting at or above relief is never reached, so the full flow follows through.
+ */
+export function pumpFlows(pump: PumpInput, workingBar: number, reliefBar: number): PumpFlows {
+  if (pump.kind === "single") {
+    return { approachLpm: pump.flowLpm, pressingLpm: pump.flowLpm, reliefLpm: pump.flowLpm, largeUnloads: false };
+  }
+  const largeUnloads = pump.unloadBar < reliefBar;
+  const unloadedWhilePressing = largeUnloads && pump.unloadBar <= workingBar;
+  return {
+    approachLpm: pump.approachFlowLpm,
+    pressingLpm: unloadedWhilePressing ? pump.pressingFlowLpm : pump.approachFlowLpm,
+    reliefLpm: largeUnloads ? pump.pressingFlowLpm : pump.approachFlowLpm,
+    largeUnloads,
+  };
 }
 
 export interface RamSpeeds {

@@ -61,6 +61,11 @@ export interface RatingsInput {
 export interface ReservoirInput {
   /** Tank volume (L). */
   volumeL: number;
+  /**
+   * Oil that can be drawn before the suction pickup takes air (L): the volume between the normal
+   * level and the pickup. When absent, half the tank is assumed (see reservoir.ts).
+   */
+  usableL?: number;
 }
 
 export type SteelGrade = "S235JR" | "S355JR" | "A36";
@@ -97,6 +102,68 @@ export interface ColumnsInput {
   grade: SteelGrade;
 }
 
+/** How a section is given: a solid rectangle or a built-up section's own properties. */
+export interface SolidSection {
+  /** Plate width across the beam (mm). */
+  widthMm: number;
+  sectionModulusMm3?: undefined;
+  inertiaMm4?: undefined;
+}
+export interface BuiltUpSection {
+  widthMm?: undefined;
+  sectionModulusMm3: number;
+  inertiaMm4: number;
+}
+
+/**
+ * The moving plate (platen) the rods push and the work pushes back on: a beam with the rods'
+ * point loads and the reaction spread over the die width, centred.
+ */
+export type PlatenInput = {
+  /** Centre distance between neighbouring rods (mm); the rods sit symmetric about the die. */
+  rodSpacingMm: number;
+  /** Width of the die face that carries the work (mm). */
+  dieWidthMm: number;
+  /** Platen thickness, or the thickest element of a built-up section: it sets the yield strength. */
+  thicknessMm: number;
+  grade: SteelGrade;
+} & (SolidSection | BuiltUpSection);
+
+/**
+ * The throat (back) of an open (C) frame: the force acts at `depthMm` from the section's neutral
+ * axis, so the back carries tension F plus bending F·depth.
+ */
+export interface ThroatBase {
+  /** Distance from the ram's axis to the neutral axis of the throat section (mm). */
+  depthMm: number;
+  /** Length of the back between the jaws, over which the bending opens the gap (mm). */
+  heightMm: number;
+  /** Plate thickness (solid) or thickest element (built-up): it sets the yield strength. */
+  thicknessMm: number;
+  grade: SteelGrade;
+}
+/** Solid back: `sectionDepthMm` measured along the throat, times the total plate thickness. */
+export interface SolidThroatInput extends ThroatBase {
+  sectionDepthMm: number;
+  areaMm2?: undefined;
+  sectionModulusMm3?: undefined;
+  inertiaMm4?: undefined;
+}
+export interface BuiltUpThroatInput extends ThroatBase {
+  sectionDepthMm?: undefined;
+  areaMm2: number;
+  /** Section modulus on the inner (tension) edge. */
+  sectionModulusMm3: number;
+  inertiaMm4: number;
+}
+export type ThroatInput = SolidThroatInput | BuiltUpThroatInput;
+
+/** A die with its own force limit, from its maker or its own calculation. */
+export interface DieLimitInput {
+  name: string;
+  maxForceKn: number;
+}
+
 export interface SizingInput {
   cylinders: CylinderInput;
   pump: PumpInput;
@@ -113,11 +180,30 @@ export interface SizingInput {
   buckling?: BucklingInput;
   ratings?: RatingsInput;
   reservoir?: ReservoirInput;
+  /** One plate (kept for older callers); `plates` gives crosshead and bolster together. */
   plate?: PlateInput;
+  /** Crosshead and/or bolster, one of each role at most. */
+  plates?: PlateInput[];
   columns?: ColumnsInput;
+  platen?: PlatenInput;
+  throat?: ThroatInput;
+  dies?: DieLimitInput[];
 }
 
 export type CheckLevel = "ok" | "warn" | "fail";
+/**
+ * A design's verdict. "incomplete" means a check that makes a press safe has not run: it ranks
+ * above "warn" (unknown is worse than a known concern) and below "fail".
+ */
+export type OverallLevel = CheckLevel | "incomplete";
+
+/** A safety check that did not run for lack of input. */
+export interface MissingCheck {
+  /** Stable identifier, e.g. "rating-hose", "plate-bolster", "rod-buckling". */
+  id: string;
+  /** What to fill in, in our words. */
+  label: string;
+}
 
 export interface Check {
   /** Stable identifier, e.g. "rating-hose". */
@@ -144,16 +230,21 @@ export interface LineVelocity {
 export type LineVelocities = Partial<Record<LineName, LineVelocity>>;
 
 export interface BucklingResult {
+  /** Recommended design effective-length factor (AISC 360-22 Commentary Table C-A-7.1). */
   kFactor: number;
   /** Stroke + exposed rod (mm). */
   unsupportedLengthMm: number;
+  /** Critical load by the governing method (kN). */
   criticalLoadKn: number;
   /** Relief force shared evenly by the rods (kN). */
   loadPerRodKn: number;
   safetyFactor: number;
   /** K·L / r */
   slenderness: number;
-  /** False when the rod is too stocky for Euler; direct stress governs then. */
+  /** λc = π·√(2E/fy): Johnson's parabola below it, Euler above. */
+  transitionSlenderness: number;
+  method: "euler" | "johnson";
+  /** True when the rod is slender enough for Euler (method "euler"). */
   eulerApplies: boolean;
   directStressMpa: number;
   rodYieldMpa: number;
@@ -183,6 +274,39 @@ export interface ReservoirResult {
   volumeL: number;
   recommendedOilL: number;
   recommendedTankL: number;
+  /** Oil the rods draw out of the tank over a full stroke (cap minus annulus volume, all cylinders). */
+  drawdownL: number;
+  usableL: number;
+  /** True when the usable volume was not given and half the tank was assumed. */
+  usableAssumed: boolean;
+}
+
+/** As a plate: momentKnM is the largest along the platen, deflectionMm the die centre's against the outer rods. */
+export type PlatenResult = Omit<PlateResult, "role">;
+
+export interface ThroatResult {
+  /** Bending moment F·e at the throat (kN·m). */
+  momentKnM: number;
+  tensionStressMpa: number;
+  bendingStressMpa: number;
+  /** Tension plus bending on the inner edge. */
+  stressMpa: number;
+  yieldMpa: number;
+  safetyFactor: number;
+  yieldTableCovers: boolean;
+  /** Angle the jaws open under full force (degrees). */
+  openingDeg: number;
+  /** Extra gap at the ram's axis from that opening (mm). */
+  gapOpeningMm: number;
+}
+
+export interface DieLimitResult {
+  name: string;
+  maxForceKn: number;
+  /** Highest gauge reading that keeps the force within the die's limit. */
+  maxGaugeBar: number;
+  /** True when the press at relief can exceed the die's limit. */
+  exceededAtRelief: boolean;
 }
 
 export interface SizingResult {
@@ -214,10 +338,19 @@ export interface SizingResult {
   maxUnloadForMotorBar?: number;
   lineVelocities?: LineVelocities;
   buckling?: BucklingResult;
+  /** The first plate (kept for older callers); `plates` lists each. */
   plate?: PlateResult;
+  plates?: PlateResult[];
   columns?: ColumnsResult;
+  platen?: PlatenResult;
+  throat?: ThroatResult;
+  dies?: DieLimitResult[];
   reservoir?: ReservoirResult;
   checks: Check[];
-  /** Worst level of all checks. */
-  overall: CheckLevel;
+  /** Safety checks that did not run; while any is listed `overall` is never "ok". */
+  missing: MissingCheck[];
+  /** Values the engine assumed because they were not given. */
+  assumptions: string[];
+  /** "fail" if any check fails, else "incomplete" if anything is missing, else the worst level. */
+  overall: OverallLevel;
 }

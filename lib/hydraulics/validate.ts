@@ -4,7 +4,7 @@
  * plate) are not refused: they come back as failing checks. The bounds are our own sanity limits,
  * far beyond any home-built press either way, which keep every result finite.
  */
-import type { SizingInput } from "./types";
+import type { PlateInput, PlatenInput, SizingInput, ThroatInput } from "./types";
 
 // Runtime lists of the string unions, for callers that bypass the types (plain JS, JSON).
 const GRADES = ["S235JR", "S355JR", "A36"] as const;
@@ -45,6 +45,10 @@ export const INPUT_LIMITS = {
   sectionModulusMm3: [1, 1e12],
   inertiaMm4: [1, 1e15],
   columnCount: [1, 64],
+  areaMm2: [1, 1e10],
+  forceKn: [0.01, 1e6],
+  dieCount: [0, 20],
+  dieNameLength: [1, 80],
 } as const satisfies Record<string, readonly [number, number]>;
 
 /** A rod must leave at least this much annulus (mm on the diameter) for the cylinder to retract. */
@@ -129,22 +133,66 @@ function checkOptionalBlocks(c: Collector, input: SizingInput): void {
     c.optional(`ratings.${key}`, value, L.ratingBar);
   }
   if (input.reservoir) c.range("reservoir.volumeL", input.reservoir.volumeL, L.volumeL);
-  const plate = input.plate;
-  if (plate) {
-    c.oneOf("plate.role", plate.role, PLATE_ROLES);
-    c.oneOf("plate.grade", plate.grade, GRADES);
-    c.range("plate.spanMm", plate.spanMm, L.plateMm);
-    c.range("plate.thicknessMm", plate.thicknessMm, L.plateMm);
-    if (plate.widthMm !== undefined) {
-      c.range("plate.widthMm", plate.widthMm, L.plateMm);
-    } else {
-      c.range("plate.sectionModulusMm3", plate.sectionModulusMm3, L.sectionModulusMm3);
-      c.range("plate.inertiaMm4", plate.inertiaMm4, L.inertiaMm4);
-    }
+  if (input.reservoir) c.optional("reservoir.usableL", input.reservoir.usableL, [0, input.reservoir.volumeL]);
+  if (input.plate) checkPlate(c, "plate", input.plate);
+  const roles = new Set<string>(input.plate ? [input.plate.role] : []);
+  (input.plates ?? []).forEach((plate, i) => {
+    checkPlate(c, `plates.${i}`, plate);
+    if (roles.has(plate.role)) c.add(`plates.${i}.role`, "must differ from the other plates' roles");
+    roles.add(plate.role);
+  });
+  if (input.platen) checkPlaten(c, input.platen);
+  if (input.throat) checkThroat(c, input.throat);
+  if (input.dies) {
+    if (input.dies.length > L.dieCount[1]) c.add("dies", `must list at most ${L.dieCount[1]} dies`);
+    input.dies.forEach((die, i) => {
+      if (typeof die.name !== "string" || die.name.trim().length < 1 || die.name.length > L.dieNameLength[1]) c.add(`dies.${i}.name`, `must be 1–${L.dieNameLength[1]} characters`);
+      c.range(`dies.${i}.maxForceKn`, die.maxForceKn, L.forceKn);
+    });
   }
   if (input.columns) {
     c.oneOf("columns.grade", input.columns.grade, GRADES);
     c.range("columns.count", input.columns.count, L.columnCount, true);
     c.range("columns.diameterMm", input.columns.diameterMm, L.diameterMm);
   }
+}
+
+/** A solid width, or both the section modulus and the moment of inertia. */
+function checkSection(c: Collector, path: string, s: { widthMm?: number; sectionModulusMm3?: number; inertiaMm4?: number }): void {
+  if (s.widthMm !== undefined) {
+    c.range(`${path}.widthMm`, s.widthMm, L.plateMm);
+  } else {
+    c.range(`${path}.sectionModulusMm3`, s.sectionModulusMm3, L.sectionModulusMm3);
+    c.range(`${path}.inertiaMm4`, s.inertiaMm4, L.inertiaMm4);
+  }
+}
+
+function checkPlate(c: Collector, path: string, plate: PlateInput): void {
+  c.oneOf(`${path}.role`, plate.role, PLATE_ROLES);
+  c.oneOf(`${path}.grade`, plate.grade, GRADES);
+  c.range(`${path}.spanMm`, plate.spanMm, L.plateMm);
+  c.range(`${path}.thicknessMm`, plate.thicknessMm, L.plateMm);
+  checkSection(c, path, plate);
+}
+
+function checkPlaten(c: Collector, platen: PlatenInput): void {
+  c.oneOf("platen.grade", platen.grade, GRADES);
+  c.range("platen.rodSpacingMm", platen.rodSpacingMm, L.plateMm);
+  c.range("platen.dieWidthMm", platen.dieWidthMm, L.plateMm);
+  c.range("platen.thicknessMm", platen.thicknessMm, L.plateMm);
+  checkSection(c, "platen", platen);
+}
+
+function checkThroat(c: Collector, throat: ThroatInput): void {
+  c.oneOf("throat.grade", throat.grade, GRADES);
+  c.range("throat.depthMm", throat.depthMm, L.plateMm);
+  c.range("throat.heightMm", throat.heightMm, L.plateMm);
+  c.range("throat.thicknessMm", throat.thicknessMm, L.plateMm);
+  if (throat.sectionDepthMm !== undefined) {
+    c.range("throat.sectionDepthMm", throat.sectionDepthMm, L.plateMm);
+    return;
+  }
+  c.range("throat.areaMm2", throat.areaMm2, L.areaMm2);
+  c.range("throat.sectionModulusMm3", throat.sectionModulusMm3, L.sectionModulusMm3);
+  c.range("throat.inertiaMm4", throat.inertiaMm4, L.inertiaMm4);
 }

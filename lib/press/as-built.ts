@@ -3,9 +3,9 @@
  * engine as the sizing page. Pure — the data layer loads the parts, the page shows the result.
  */
 import { evaluateSizing, SizingInputError } from "@/lib/hydraulics";
-import { makeCheck } from "@/lib/hydraulics/checks";
+import { makeCheck, overallLevel } from "@/lib/hydraulics/checks";
 import { COMMON_PRACTICE } from "@/lib/hydraulics/sources";
-import type { Check, SizingInput, SizingResult } from "@/lib/hydraulics/types";
+import type { Check, MissingCheck, OverallLevel, SizingInput, SizingResult, ThroatInput } from "@/lib/hydraulics/types";
 import type { UnitSystem } from "@/lib/units";
 import type { ComponentSpec, SpecOf } from "@/lib/validation/component-spec";
 
@@ -13,7 +13,15 @@ export type InstalledPart = { id: string; label: string; spec: ComponentSpec };
 export type PressFigures = { workingPressureBar: number | null; reliefPressureBar: number | null };
 
 export type AsBuilt =
-  | { ready: true; input: SizingInput; result: SizingResult; checks: Check[] }
+  | {
+      ready: true;
+      input: SizingInput;
+      result: SizingResult;
+      checks: Check[];
+      /** The engine's verdict over these checks: never "ok" while `missingChecks` lists anything. */
+      overall: OverallLevel;
+      missingChecks: MissingCheck[];
+    }
   | { ready: false; missing: string[]; checks: Check[] };
 
 const of = <K extends ComponentSpec["kind"]>(parts: InstalledPart[], kind: K): (InstalledPart & { spec: SpecOf<K> })[] =>
@@ -50,7 +58,8 @@ export function evaluateAsBuilt(press: PressFigures, parts: InstalledPart[], sys
   const input = sizingInputFrom(press, parts, { reliefBar, cylinderCount: cylinders.length });
   try {
     const result = evaluateSizing(input, { system });
-    return { ready: true, input, result, checks: [...extra, ...nameTheWeakest(result.checks, parts)] };
+    const checks = [...extra, ...nameTheWeakest(result.checks, parts)];
+    return { ready: true, input, result, checks, overall: overallLevel(checks, result.missing), missingChecks: result.missing };
   } catch (error) {
     if (error instanceof SizingInputError) {
       return { ready: false, missing: error.problems.map((p) => `${p.path}: ${p.message}`), checks: extra };
@@ -66,8 +75,13 @@ function sizingInputFrom(press: PressFigures, parts: InstalledPart[], ctx: { rel
   const hoseId = (line: "pressure" | "return" | "suction") => lowest(hoses.filter((h) => h.spec.line === line), (h) => h.spec.insideDiameterMm)?.value;
   const motor = of(parts, "motor")[0];
   const reservoir = of(parts, "reservoir")[0];
-  const plate = of(parts, "crosshead")[0] ?? of(parts, "bolster")[0];
+  const plates = [of(parts, "crosshead")[0], of(parts, "bolster")[0]].flatMap((p) =>
+    p ? [{ role: p.spec.kind, spanMm: p.spec.spanMm, widthMm: p.spec.widthMm, thicknessMm: p.spec.thicknessMm, grade: p.spec.grade }] : [],
+  );
   const columns = of(parts, "frame-member").filter((m) => (m.spec.role === "column" || m.spec.role === "tie-rod") && m.spec.diameterMm);
+  const platen = of(parts, "platen")[0]?.spec;
+  const throat = throatOf(parts);
+  const dies = of(parts, "die").flatMap((d) => (d.spec.maxForceKn !== undefined ? [{ name: d.label, maxForceKn: d.spec.maxForceKn }] : []));
   const lines = { pressureIdMm: hoseId("pressure"), returnIdMm: hoseId("return"), suctionIdMm: hoseId("suction") };
   const ratings = {
     hoseBar: lowest(pressureHoses(parts), (h) => h.spec.ratedPressureBar)?.value,
@@ -89,9 +103,23 @@ function sizingInputFrom(press: PressFigures, parts: InstalledPart[], ctx: { rel
     ...(cylinder.exposedRodMm !== undefined ? { buckling: { endFixity: cylinder.endFixity, exposedRodMm: cylinder.exposedRodMm } } : {}),
     ratings: dropUndefined(ratings),
     ...(reservoir ? { reservoir: { volumeL: reservoir.spec.volumeL } } : {}),
-    ...(plate ? { plate: { role: plate.spec.kind, spanMm: plate.spec.spanMm, widthMm: plate.spec.widthMm, thicknessMm: plate.spec.thicknessMm, grade: plate.spec.grade } } : {}),
+    ...(plates.length > 0 ? { plates } : {}),
     ...(columns.length > 0 ? { columns: { count: columns.length, diameterMm: Math.min(...columns.map((c) => c.spec.diameterMm!)), grade: columns[0]!.spec.grade } } : {}),
+    ...(platen ? { platen: { rodSpacingMm: platen.rodSpacingMm, dieWidthMm: platen.dieWidthMm, widthMm: platen.widthMm, thicknessMm: platen.thicknessMm, grade: platen.grade } } : {}),
+    ...(throat ? { throat } : {}),
+    ...(dies.length > 0 ? { dies } : {}),
   };
+}
+
+/** An open frame's throat, from a frame member with the role "throat" and all four figures. */
+function throatOf(parts: InstalledPart[]): ThroatInput | undefined {
+  for (const m of of(parts, "frame-member")) {
+    const { role, throatDepthMm, lengthMm, widthMm, thicknessMm, grade } = m.spec;
+    if (role === "throat" && throatDepthMm && lengthMm && widthMm && thicknessMm) {
+      return { depthMm: throatDepthMm, heightMm: lengthMm, sectionDepthMm: widthMm, thicknessMm, grade };
+    }
+  }
+  return undefined;
 }
 
 /**
@@ -110,6 +138,7 @@ function nameTheWeakest(checks: Check[], parts: InstalledPart[]): Check[] {
     "rating-cylinder": lowest(of(parts, "cylinder"), (c) => c.spec.ratedPressureBar)?.part,
     "rating-pump": of(parts, "pump")[0],
     "rating-gauge": lowest(of(parts, "gauge"), (g) => g.spec.rangeBar)?.part,
+    "rod-side-intensification": lowest(of(parts, "cylinder"), (c) => c.spec.ratedPressureBar)?.part,
   };
   return checks.map((c) => {
     const part = weakest[c.id];

@@ -22,6 +22,7 @@ export const KIND_LABELS: Record<ComponentKind, string> = {
   "frame-member": "Frame member",
   crosshead: "Crosshead",
   bolster: "Bolster plate",
+  platen: "Platen (moving plate)",
   cylinder: "Cylinder",
   pump: "Pump",
   motor: "Motor",
@@ -35,9 +36,10 @@ export const KIND_LABELS: Record<ComponentKind, string> = {
 };
 
 export const SPEC_FIELDS: Record<ComponentKind, SpecField[]> = {
-  "frame-member": [sel("role", "Role", FRAME_MEMBER_ROLES), q("lengthMm", "Length", "length", false), q("diameterMm", "Diameter (root diameter for a thread)", "length", false), q("widthMm", "Width", "length", false), q("thicknessMm", "Thickness", "length", false), sel("grade", "Steel grade", STEEL_GRADES)],
+  "frame-member": [sel("role", "Role", FRAME_MEMBER_ROLES), q("lengthMm", "Length", "length", false), q("diameterMm", "Diameter (root diameter for a thread)", "length", false), q("widthMm", "Width (throat: the back's section depth)", "length", false), q("thicknessMm", "Thickness", "length", false), q("throatDepthMm", "Throat depth, ram axis to the back's centre (open frames)", "length", false), sel("grade", "Steel grade", STEEL_GRADES)],
   crosshead: plateFields,
   bolster: plateFields,
+  platen: [q("rodSpacingMm", "Rod spacing (centre to centre)", "length"), q("dieWidthMm", "Die width", "length"), q("widthMm", "Width", "length"), q("thicknessMm", "Thickness", "length"), sel("grade", "Steel grade", STEEL_GRADES)],
   cylinder: [q("boreMm", "Bore", "length"), q("rodMm", "Rod", "length"), q("strokeMm", "Stroke", "length"), q("ratedPressureBar", "Rated pressure", "pressure"), sel("endFixity", "Rod end fixity", END_FIXITIES), q("exposedRodMm", "Exposed rod at full retraction", "length", false)],
   pump: [sel("pumpKind", "Pump type", ["single", "two-stage"]), q("flowLpm", "Flow (single-stage)", "flow", false), q("approachFlowLpm", "Total flow below unloading (two-stage)", "flow", false), q("pressingFlowLpm", "Pressing flow, small section (two-stage)", "flow", false), q("unloadBar", "Unloading pressure (two-stage)", "pressure", false), q("ratedPressureBar", "Rated pressure", "pressure")],
   motor: [q("powerKw", "Power", "power"), { name: "speedRpm", label: "Speed", type: "number", unit: "rpm", required: false }, sel("supply", "Supply", MOTOR_SUPPLIES)],
@@ -47,5 +49,5 @@ export const SPEC_FIELDS: Record<ComponentKind, SpecField[]> = {
   filter: [sel("location", "Location", LINES), { name: "ratingMicron", label: "Rating", type: "number", unit: "µm", required: true }, text("elementPart", "Element part number")],
   reservoir: [q("volumeL", "Volume", "volume"), text("oilGrade", "Oil grade (e.g. ISO VG 46)")],
   gauge: [q("rangeBar", "Full-scale range", "pressure")],
-  die: [text("purpose", "Purpose", true), q("widthMm", "Width", "length", false), q("lengthMm", "Length", "length", false)],
+  die: [text("purpose", "Purpose", true), q("widthMm", "Width", "length", false), q("lengthMm", "Length", "length", false), q("maxForceKn", "Force limit (maker's or own calculation)", "force", false)],
 };

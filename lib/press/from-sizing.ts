@@ -3,6 +3,7 @@
  * blank record. Pure. Ratings the sizing did not state are left for the builder to fill in from
  * the parts they actually buy — never guessed.
  */
+import { allPlates } from "@/lib/hydraulics";
 import type { SizingInput } from "@/lib/hydraulics/types";
 import { componentInputSchema, type ComponentInput } from "@/lib/validation/press";
 
@@ -43,10 +44,21 @@ export function componentsFromSizing(input: SizingInput): ComponentInput[] {
   }
   if (input.reservoir) parts.push({ kind: "reservoir", label: "Reservoir", spec: { volumeL: input.reservoir.volumeL } });
   if (r.gaugeBar) parts.push({ kind: "gauge", label: "Gauge", spec: { rangeBar: r.gaugeBar } });
-  if (input.plate && input.plate.widthMm !== undefined) {
-    const { role, spanMm, widthMm, thicknessMm, grade } = input.plate;
+  // Component records hold solid plates; a built-up section stays in the saved sizing only.
+  for (const plate of allPlates(input)) {
+    if (plate.widthMm === undefined) continue;
+    const { role, spanMm, widthMm, thicknessMm, grade } = plate;
     parts.push({ kind: role, label: role === "crosshead" ? "Crosshead" : "Bolster plate", spec: { spanMm, widthMm, thicknessMm, grade } });
   }
+  if (input.platen && input.platen.widthMm !== undefined) {
+    const { rodSpacingMm, dieWidthMm, widthMm, thicknessMm, grade } = input.platen;
+    parts.push({ kind: "platen", label: "Platen", spec: { rodSpacingMm, dieWidthMm, widthMm, thicknessMm, grade } });
+  }
+  if (input.throat && input.throat.sectionDepthMm !== undefined) {
+    const { depthMm, heightMm, sectionDepthMm, thicknessMm, grade } = input.throat;
+    parts.push({ kind: "frame-member", label: "Throat (back)", spec: { role: "throat", throatDepthMm: depthMm, lengthMm: heightMm, widthMm: sectionDepthMm, thicknessMm, grade } });
+  }
+  for (const die of input.dies ?? []) parts.push({ kind: "die", label: die.name, spec: { purpose: die.name, maxForceKn: die.maxForceKn } });
   if (input.columns) {
     for (let n = 1; n <= input.columns.count; n++) {
       parts.push({ kind: "frame-member", label: `Column ${n}`, spec: { role: "column", diameterMm: input.columns.diameterMm, grade: input.columns.grade } });

@@ -14,7 +14,7 @@ const positive = (label: string, max: number) =>
 
 export const STEEL_GRADES = ["S235JR", "S355JR", "A36"] as const;
 export const END_FIXITIES = ["fixed-fixed", "fixed-pinned", "pinned-pinned", "fixed-free"] as const;
-export const FRAME_MEMBER_ROLES = ["column", "tie-rod", "side-plate", "beam", "other"] as const;
+export const FRAME_MEMBER_ROLES = ["column", "tie-rod", "side-plate", "beam", "throat", "other"] as const;
 export const LINES = ["pressure", "return", "suction"] as const;
 export const MOTOR_SUPPLIES = ["single-phase", "three-phase", "engine", "other"] as const;
 
@@ -35,11 +35,27 @@ export const frameMemberSpec = z.strictObject({
   diameterMm: positive("Diameter", 500).optional(),
   widthMm: positive("Width", 3000).optional(),
   thicknessMm: positive("Thickness", 500).optional(),
+  /**
+   * Throat of an open (C) frame: distance from the ram's axis to the back's centre line. With it,
+   * `lengthMm` is the back's length between the jaws, `widthMm` the back's section depth and
+   * `thicknessMm` its total plate thickness.
+   */
+  throatDepthMm: positive("Throat depth", 3000).optional(),
   grade,
 });
 
 export const crossheadSpec = z.strictObject({ kind: z.literal("crosshead"), ...plate });
 export const bolsterSpec = z.strictObject({ kind: z.literal("bolster"), ...plate });
+
+/** The moving plate between parallel rams: rods `rodSpacingMm` apart, the work over `dieWidthMm`. */
+export const platenSpec = z.strictObject({
+  kind: z.literal("platen"),
+  rodSpacingMm: positive("Rod spacing", 5000),
+  dieWidthMm: positive("Die width", 3000),
+  widthMm: positive("Width", 3000),
+  thicknessMm: positive("Thickness", 500),
+  grade,
+});
 
 export const cylinderSpec = z
   .strictObject({
@@ -137,12 +153,15 @@ export const dieSpec = z.strictObject({
   purpose: z.string().trim().min(1, "Say what the die is for.").max(100),
   widthMm: positive("Width", 3000).optional(),
   lengthMm: positive("Length", 3000).optional(),
+  /** The die's own force limit, from its maker or its own calculation (kN). */
+  maxForceKn: positive("Force limit", 100000).optional(),
 });
 
 export const componentSpecSchema = z.union([
   frameMemberSpec,
   crossheadSpec,
   bolsterSpec,
+  platenSpec,
   cylinderSpec,
   pumpSpec,
   motorSpec,
@@ -164,6 +183,7 @@ export const SPEC_SCHEMAS = {
   "frame-member": frameMemberSpec,
   crosshead: crossheadSpec,
   bolster: bolsterSpec,
+  platen: platenSpec,
   cylinder: cylinderSpec,
   pump: pumpSpec,
   motor: motorSpec,

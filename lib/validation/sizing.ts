@@ -9,7 +9,7 @@
  */
 import * as z from "zod/mini";
 import { INPUT_LIMITS, type InputProblem } from "@/lib/hydraulics";
-import type { PlateInput, SizingInput } from "@/lib/hydraulics/types";
+import type { PlateInput, PlatenInput, SizingInput, ThroatInput } from "@/lib/hydraulics/types";
 import { MIN_BORE_MINUS_ROD_MM } from "@/lib/hydraulics/validate";
 
 const L = INPUT_LIMITS;
@@ -133,6 +133,26 @@ const ratings = z.strictObject(
 
 const PLATE_SECTION_MESSAGE = "Give either the plate width, or both the section modulus and the moment of inertia.";
 
+/** A solid width, or a built-up section's modulus and inertia: exactly one of the two. */
+function sectionRule(message: string) {
+  return z.superRefine((p: { widthMm?: number; sectionModulusMm3?: number; inertiaMm4?: number }, ctx) => {
+    const section = p.sectionModulusMm3 !== undefined || p.inertiaMm4 !== undefined;
+    const complain = (field: string): void => ctx.addIssue({ code: "custom", message, path: [field], input: p });
+    if (p.widthMm !== undefined && section) complain("widthMm");
+    if (p.widthMm === undefined && p.sectionModulusMm3 === undefined) complain("widthMm");
+    if (p.widthMm === undefined && section && p.inertiaMm4 === undefined) complain("inertiaMm4");
+  });
+}
+
+/** Width of a solid plate, or the modulus and inertia of a built-up section. */
+function sectionFields(what: string) {
+  return {
+    widthMm: opt(num(`${what} width`, L.plateMm, "mm")),
+    sectionModulusMm3: opt(num("Section modulus", L.sectionModulusMm3, "mm³")),
+    inertiaMm4: opt(num("Moment of inertia", L.inertiaMm4, "mm⁴")),
+  };
+}
+
 const plateFields = z
   .strictObject(
     {
@@ -140,31 +160,92 @@ const plateFields = z
       spanMm: num("Plate span", L.plateMm, "mm"),
       thicknessMm: num("Plate thickness", L.plateMm, "mm"),
       grade: oneOf("Steel grade", STEEL_GRADES),
-      widthMm: opt(num("Plate width", L.plateMm, "mm")),
-      sectionModulusMm3: opt(num("Section modulus", L.sectionModulusMm3, "mm³")),
-      inertiaMm4: opt(num("Moment of inertia", L.inertiaMm4, "mm⁴")),
+      ...sectionFields("Plate"),
     },
     objectError("plate", "role, spanMm, thicknessMm, grade, widthMm | sectionModulusMm3 + inertiaMm4"),
   )
-  .check(
-    z.superRefine((p, ctx) => {
-      const section = p.sectionModulusMm3 !== undefined || p.inertiaMm4 !== undefined;
-      const complain = (field: string): void => ctx.addIssue({ code: "custom", message: PLATE_SECTION_MESSAGE, path: [field], input: p });
-      if (p.widthMm !== undefined && section) complain("widthMm");
-      if (p.widthMm === undefined && p.sectionModulusMm3 === undefined) complain("widthMm");
-      if (p.widthMm === undefined && section && p.inertiaMm4 === undefined) complain("inertiaMm4");
-    }),
-  );
+  .check(sectionRule(PLATE_SECTION_MESSAGE));
+
+/** The checked fields as the engine's solid-or-built-up union (the rule above guarantees one). */
+function withSection<T extends { widthMm?: number; sectionModulusMm3?: number; inertiaMm4?: number }>(p: T) {
+  const { widthMm, sectionModulusMm3, inertiaMm4, ...base } = p;
+  if (widthMm !== undefined) return { ...base, widthMm };
+  return { ...base, sectionModulusMm3: sectionModulusMm3 ?? Number.NaN, inertiaMm4: inertiaMm4 ?? Number.NaN };
+}
 
 const plate = z.pipe(
   plateFields,
-  z.transform((p): PlateInput => {
-    const base = { role: p.role, spanMm: p.spanMm, thicknessMm: p.thicknessMm, grade: p.grade };
-    if (p.widthMm !== undefined) return { ...base, widthMm: p.widthMm };
-    // The check above guarantees both section figures here.
-    return { ...base, sectionModulusMm3: p.sectionModulusMm3 ?? Number.NaN, inertiaMm4: p.inertiaMm4 ?? Number.NaN };
+  z.transform((p): PlateInput => withSection(p)),
+);
+
+const PLATEN_SECTION_MESSAGE = "Give either the platen width, or both the section modulus and the moment of inertia.";
+const platen = z.pipe(
+  z
+    .strictObject(
+      {
+        rodSpacingMm: num("Rod spacing", L.plateMm, "mm"),
+        dieWidthMm: num("Die width", L.plateMm, "mm"),
+        thicknessMm: num("Platen thickness", L.plateMm, "mm"),
+        grade: oneOf("Platen steel grade", STEEL_GRADES),
+        ...sectionFields("Platen"),
+      },
+      objectError("platen", "rodSpacingMm, dieWidthMm, thicknessMm, grade, widthMm | sectionModulusMm3 + inertiaMm4"),
+    )
+    .check(sectionRule(PLATEN_SECTION_MESSAGE)),
+  z.transform((p): PlatenInput => withSection(p)),
+);
+
+const THROAT_SECTION_MESSAGE = "Give either the section depth (solid), or the area, section modulus and moment of inertia (built-up).";
+const throat = z.pipe(
+  z
+    .strictObject(
+      {
+        depthMm: num("Throat depth", L.plateMm, "mm"),
+        heightMm: num("Throat height", L.plateMm, "mm"),
+        thicknessMm: num("Throat thickness", L.plateMm, "mm"),
+        grade: oneOf("Throat steel grade", STEEL_GRADES),
+        sectionDepthMm: opt(num("Throat section depth", L.plateMm, "mm")),
+        areaMm2: opt(num("Throat section area", L.areaMm2, "mm²")),
+        sectionModulusMm3: opt(num("Section modulus", L.sectionModulusMm3, "mm³")),
+        inertiaMm4: opt(num("Moment of inertia", L.inertiaMm4, "mm⁴")),
+      },
+      objectError("throat", "depthMm, heightMm, thicknessMm, grade, sectionDepthMm | areaMm2 + sectionModulusMm3 + inertiaMm4"),
+    )
+    .check(
+      z.superRefine((t, ctx) => {
+        const builtUp = [t.areaMm2, t.sectionModulusMm3, t.inertiaMm4];
+        const complain = (field: string): void => ctx.addIssue({ code: "custom", message: THROAT_SECTION_MESSAGE, path: [field], input: t });
+        if (t.sectionDepthMm !== undefined && builtUp.some((v) => v !== undefined)) complain("sectionDepthMm");
+        if (t.sectionDepthMm === undefined) {
+          (["areaMm2", "sectionModulusMm3", "inertiaMm4"] as const).forEach((key) => t[key] === undefined && complain(key));
+        }
+      }),
+    ),
+  z.transform((t): ThroatInput => {
+    const base = { depthMm: t.depthMm, heightMm: t.heightMm, thicknessMm: t.thicknessMm, grade: t.grade };
+    if (t.sectionDepthMm !== undefined) return { ...base, sectionDepthMm: t.sectionDepthMm };
+    return { ...base, areaMm2: t.areaMm2 ?? Number.NaN, sectionModulusMm3: t.sectionModulusMm3 ?? Number.NaN, inertiaMm4: t.inertiaMm4 ?? Number.NaN };
   }),
 );
+
+const die = z.strictObject(
+  {
+    name: z.string({ error: "Die name is required." }).check(
+      z.trim(),
+      z.minLength(L.dieNameLength[0], { error: "Die name is required." }),
+      z.maxLength(L.dieNameLength[1], { error: `Die name must be at most ${L.dieNameLength[1]} characters.` }),
+    ),
+    maxForceKn: num("Die force limit", L.forceKn, "kN"),
+  },
+  objectError("die", "name, maxForceKn"),
+);
+
+const plates = z
+  .array(plate, { error: "plates must be a list of plates." })
+  .check(
+    z.maxLength(2, { error: "plates lists at most two plates: a crosshead and a bolster." }),
+    z.refine((list) => new Set(list.map((p) => p.role)).size === list.length, { message: "Each plate role may appear once.", path: [] }),
+  );
 
 const columns = z.strictObject(
   {
@@ -188,13 +269,34 @@ const sizingObject = z
       lines: opt(lines),
       buckling: opt(buckling),
       ratings: opt(ratings),
-      reservoir: opt(z.strictObject({ volumeL: num("Reservoir volume", L.volumeL, "L") }, objectError("reservoir", "volumeL"))),
+      reservoir: opt(
+        z
+          .strictObject(
+            { volumeL: num("Reservoir volume", L.volumeL, "L"), usableL: opt(num("Usable volume above the pickup", L.volumeL, "L")) },
+            objectError("reservoir", "volumeL, usableL?"),
+          )
+          .check(
+            z.refine((r) => r.usableL === undefined || r.usableL <= r.volumeL, {
+              message: "Usable volume above the pickup cannot exceed the tank volume.",
+              path: ["usableL"],
+              when: whenClean("volumeL", "usableL"),
+            }),
+          ),
+      ),
       plate: opt(plate),
+      plates: opt(plates),
       columns: opt(columns),
+      platen: opt(platen),
+      throat: opt(throat),
+      dies: opt(z.array(die, { error: "dies must be a list." }).check(z.maxLength(L.dieCount[1], { error: `List at most ${L.dieCount[1]} dies.` }))),
     },
     { error: "Send a JSON object with the sizing input." },
   )
   .check(
+    z.refine((s) => !(s.plate && s.plates?.some((p) => p.role === s.plate?.role)), {
+      message: "This plate role is already given in plate; give each role once.",
+      path: ["plates"],
+    }),
     z.refine((s) => s.pressDistanceMm === undefined || s.pressDistanceMm <= s.cylinders.strokeMm, {
       message: "Pressing distance must not exceed the stroke.",
       path: ["pressDistanceMm"],

@@ -7,6 +7,7 @@ import { db } from "@/db/client";
 import { rateLimitWindows } from "@/db/schema";
 import { CLIENT_IP_HEADER } from "@/lib/auth/client-ip";
 import { hitRateLimit, SIZING_API_LIMIT } from "@/lib/rate-limit";
+import { FULL_SIZING_INPUT } from "../fixtures/sizing-inputs";
 
 /** Each test its own invented address, so rate-limit counts never mix. */
 const fakeIp = (): string => `test-${randomUUID()}`;
@@ -62,6 +63,52 @@ describe("POST /api/sizing — good request", () => {
     const checks = body.checks as { id: string; message: string }[];
     expect(checks.find((c) => c.id === "relief-vs-working")?.message).toContain("psi");
     expect(body.forceKn as number).toBeCloseTo(139.75, 2);
+  });
+});
+
+describe("POST /api/sizing — incomplete, missing and the second-edition blocks", () => {
+  it("a design without frame, ratings or buckling is incomplete and lists what is missing; an omitted relief is an assumption", async () => {
+    const { reliefBar: _relief, ratings: _ratings, ...bare } = GOOD;
+    const body = (await (await call(sizingRequest(bare))).json()) as Body & { missing: { id: string; label: string }[]; assumptions: string[] };
+    expect(body.overall).toBe("incomplete");
+    expect(body.missing.map((m) => m.id)).toEqual([
+      "rating-hose", "rating-valve", "rating-pump", "rating-cylinder", "plate-crosshead", "plate-bolster", "columns", "rod-buckling",
+    ]);
+    for (const m of body.missing) expect(m.label.length).toBeGreaterThan(3);
+    expect(body.assumptions).toHaveLength(1);
+  });
+
+  it("every block filled: nothing missing; the platen, throat and die results come back", async () => {
+    const body = (await (await call(sizingRequest(FULL_SIZING_INPUT))).json()) as Body & { missing: unknown[] };
+    expect(body.missing).toEqual([]);
+    expect(["ok", "warn"]).toContain(body.overall);
+    expect(body.platen).toMatchObject({ safetyFactor: expect.any(Number), deflectionMm: expect.any(Number) });
+    expect(body.throat).toMatchObject({ openingDeg: expect.any(Number) });
+    expect(body.dies).toEqual([expect.objectContaining({ name: "Drawing dies", maxGaugeBar: expect.any(Number) })]);
+    expect((body.plates as unknown[]).length).toBe(2);
+  });
+
+  it("a two-ram design with a thin platen fails and names the platen", async () => {
+    const thin = { ...FULL_SIZING_INPUT, platen: { rodSpacingMm: 400, dieWidthMm: 80, widthMm: 200, thicknessMm: 20, grade: "S235JR" } };
+    const body = (await (await call(sizingRequest(thin))).json()) as Body;
+    expect(body.overall).toBe("fail");
+    const platen = (body.checks as { id: string; level: string; message: string }[]).find((c) => c.id === "platen");
+    expect(platen?.level).toBe("fail");
+    expect(platen?.message).toMatch(/^Platen/);
+  });
+
+  it.each([
+    ["platen without a section", { platen: { rodSpacingMm: 300, dieWidthMm: 100, thicknessMm: 50, grade: "S355JR" } }, ["platen.widthMm"]],
+    ["platen with an unknown key", { platen: { rodSpacingMm: 300, dieWidthMm: 100, thicknessMm: 50, grade: "S355JR", widthMm: 200, holes: 2 } }, ["platen.holes"]],
+    ["throat with half a built-up section", { throat: { depthMm: 200, heightMm: 500, thicknessMm: 40, grade: "A36", areaMm2: 1000 } }, ["throat.sectionModulusMm3", "throat.inertiaMm4"]],
+    ["throat with a bad grade", { throat: { depthMm: 200, heightMm: 500, thicknessMm: 40, grade: "S275", sectionDepthMm: 300 } }, ["throat.grade"]],
+    ["die without a limit", { dies: [{ name: "Flat" }] }, ["dies.0.maxForceKn"]],
+    ["two bolsters", { plates: [FULL_SIZING_INPUT.plates![1], FULL_SIZING_INPUT.plates![1]] }, ["plates"]],
+  ])("400 for %s, naming the key", async (_name, patch, fields) => {
+    const res = await call(sizingRequest({ ...GOOD, ...patch }));
+    expect(res.status).toBe(400);
+    const json = (await res.json()) as Body;
+    expect(Object.keys(json.fieldErrors ?? {}).sort()).toEqual([...fields].sort());
   });
 });
 

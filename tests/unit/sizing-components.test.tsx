@@ -2,7 +2,7 @@
 import { cleanup, fireEvent, render, screen, within } from "@testing-library/react";
 import { useState } from "react";
 import { afterEach, beforeEach, describe, expect, it, vi } from "vitest";
-import { CheckList } from "@/components/sizing/check-list";
+import { CheckList, OverallVerdict } from "@/components/sizing/check-list";
 import { SizingCalculator } from "@/components/sizing/sizing-calculator";
 import { UnitSwitch } from "@/components/sizing/unit-switch";
 import { UNIT_STORAGE_KEY } from "@/components/sizing/use-unit-system";
@@ -49,7 +49,23 @@ describe("CheckList", () => {
 
   it("says so when everything passes", () => {
     render(<CheckList checks={[CHECKS[0] as Check]} />);
-    expect(screen.getByText("Every check passes for these inputs.")).toBeTruthy();
+    expect(screen.getByText("Every check that ran passes for these inputs.")).toBeTruthy();
+  });
+});
+
+describe("OverallVerdict", () => {
+  it("shows 'incomplete' in words with the missing checks, never only by colour", () => {
+    render(<OverallVerdict overall="incomplete" missing={[{ id: "platen", label: "Platen between the rams" }]} />);
+    const verdict = screen.getByTestId("overall-verdict");
+    expect(verdict.textContent).toContain("Incomplete — not every safety check has run");
+    expect(verdict.querySelector("svg")).not.toBeNull();
+    expect(within(verdict).getByText("Platen between the rams")).toBeTruthy();
+  });
+
+  it("lists nothing when every safety check ran", () => {
+    render(<OverallVerdict overall="ok" missing={[]} />);
+    expect(screen.getByTestId("overall-verdict").textContent).toContain("OK — every safety check ran");
+    expect(screen.queryByTestId("missing-checks")).toBeNull();
   });
 });
 

@@ -23,6 +23,47 @@ function errorsOf(input: unknown): Record<string, string[]> {
 
 const withCylinders = (patch: Partial<SizingInput["cylinders"]>): unknown => ({ ...MINIMAL, cylinders: { ...MINIMAL.cylinders, ...patch } });
 
+describe("sizingInputSchema: second-edition blocks", () => {
+  it("accepts plates, platen (solid or built-up), throat (solid or built-up), dies and a usable tank volume", () => {
+    const input = {
+      ...MINIMAL,
+      reservoir: { volumeL: 100, usableL: 40 },
+      platen: { rodSpacingMm: 300, dieWidthMm: 100, thicknessMm: 50, grade: "S355JR", sectionModulusMm3: 2e5, inertiaMm4: 2e7 },
+      throat: { depthMm: 200, heightMm: 500, thicknessMm: 40, grade: "A36", areaMm2: 12_000, sectionModulusMm3: 6e5, inertiaMm4: 9e7 },
+      dies: [{ name: "Fullers", maxForceKn: 120 }],
+    };
+    expect(sizingInputSchema.parse(input)).toEqual(input);
+  });
+
+  it("names each bad key of the new blocks", () => {
+    const errors = errorsOf({
+      ...MINIMAL,
+      platen: { rodSpacingMm: 300, dieWidthMm: -1, thicknessMm: 50, grade: "S355JR", widthMm: 200, sectionModulusMm3: 1e5, extra: 1 },
+      throat: { depthMm: 200, heightMm: 500, thicknessMm: 40, grade: "A36", areaMm2: 12_000 },
+      dies: [{ name: "", maxForceKn: 0 }],
+      reservoir: { volumeL: 10, usableL: 20 },
+      plates: [
+        { role: "bolster", spanMm: 300, widthMm: 200, thicknessMm: 40, grade: "A36" },
+        { role: "bolster", spanMm: 300, widthMm: 200, thicknessMm: 40, grade: "A36" },
+      ],
+    });
+    expect(Object.keys(errors).sort()).toEqual(
+      [
+        "dies.0.maxForceKn",
+        "dies.0.name",
+        "plates",
+        "platen.dieWidthMm",
+        "platen.extra",
+        "platen.widthMm",
+        "reservoir.usableL",
+        "throat.inertiaMm4",
+        "throat.sectionModulusMm3",
+      ].sort(),
+    );
+    expect(errors["platen.extra"]).toEqual(['Unknown field "extra".']);
+  });
+});
+
 describe("sizingInputSchema: good input", () => {
   it("accepts the minimal input and returns it unchanged", () => {
     expect(sizingInputSchema.parse(MINIMAL)).toEqual(MINIMAL);

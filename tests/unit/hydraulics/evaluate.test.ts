@@ -44,9 +44,14 @@ describe("evaluateSizing: the core figures", () => {
     expect(r.maxPressureForMotorBar).toBeUndefined();
   });
 
-  it("without optional blocks: only the cross-cutting checks, all ok", () => {
+  it("without optional blocks: only the cross-cutting checks, the relief an assumption, the design incomplete", () => {
     expect(r.checks.map((c) => c.id)).toEqual(["relief-vs-working", "efficiency-range"]);
-    expect(r.overall).toBe("ok");
+    expect(r.checks[0]?.level).toBe("warn");
+    expect(r.assumptions).toHaveLength(1);
+    expect(r.missing.map((m) => m.id)).toEqual([
+      "rating-hose", "rating-valve", "rating-pump", "rating-cylinder", "plate-crosshead", "plate-bolster", "columns", "rod-buckling",
+    ]);
+    expect(r.overall).toBe("incomplete");
   });
 });
 
@@ -57,8 +62,15 @@ describe("evaluateSizing: every block", () => {
     expect(r.lineVelocities && Object.keys(r.lineVelocities)).toEqual(["suction", "pressure", "return"]);
     expect(r.buckling?.loadPerRodKn).toBeCloseTo(r.reliefForceKn / 2, 12);
     expect(r.plate?.role).toBe("crosshead");
+    expect(r.plates?.map((p) => p.role)).toEqual(["crosshead", "bolster"]);
+    expect(r.platen?.safetyFactor).toBeGreaterThan(2);
+    expect(r.throat?.safetyFactor).toBeGreaterThan(2);
+    expect(r.dies?.[0]?.exceededAtRelief).toBe(true);
+    expect(r.missing).toEqual([]);
+    expect(r.assumptions).toEqual([]);
     expect(r.columns?.loadPerColumnKn).toBeCloseTo(r.reliefForceKn / 4, 12);
     expect(r.reservoir?.recommendedOilL).toBe(120);
+    expect(r.reservoir?.drawdownL).toBeCloseTo((2 * circleAreaMm2(56) * 250) / 1e6, 12);
     expect(r.maxPressureForMotorBar).toBeCloseTo((5.5 * 600 * 0.85) / 8, 9);
     expect(r.maxUnloadForMotorBar).toBeCloseTo((5.5 * 600 * 0.85) / 40, 9);
   });
@@ -70,14 +82,14 @@ describe("evaluateSizing: every block", () => {
 
   it("gives every check an id, a level, a message, a rule and a source; ids are unique", () => {
     for (const c of r.checks) {
-      expect(c.id).toMatch(/^[a-z-]+$/);
+      expect(c.id).toMatch(/^[a-z0-9-]+$/);
       expect(["ok", "warn", "fail"]).toContain(c.level);
       for (const text of [c.message, c.rule, c.source]) expect(text.length).toBeGreaterThan(10);
     }
     expect(new Set(r.checks.map((c) => c.id)).size).toBe(r.checks.length);
   });
 
-  it("overall is the worst check", () => {
+  it("overall is the worst check once nothing is missing", () => {
     expect(r.overall).toBe(r.checks.some((c) => c.level === "fail") ? "fail" : r.checks.some((c) => c.level === "warn") ? "warn" : "ok");
   });
 
@@ -107,7 +119,10 @@ describe("evaluateSizing: checks that must fail", () => {
   });
 
   it("a plate or columns under a factor of 2 on yield make the design fail", () => {
-    const thinPlate = evaluateSizing({ ...FULL, plate: { role: "bolster", spanMm: 350, widthMm: 200, thicknessMm: 25, grade: "S235JR" } });
+    const thinPlate = evaluateSizing({
+      ...FULL,
+      plates: [FULL.plates![0]!, { role: "bolster", spanMm: 350, widthMm: 200, thicknessMm: 25, grade: "S235JR" }],
+    });
     expect(thinPlate.checks.find((c) => c.id === "plate-bolster")?.level).toBe("fail");
     expect(thinPlate.overall).toBe("fail");
     const thinColumns = evaluateSizing({ ...FULL, columns: { count: 2, diameterMm: 20, grade: "S235JR" } });
@@ -143,8 +158,9 @@ describe("evaluateSizing: refused input", () => {
   it("refuses a pressing flow above the total, and unknown grades or fixities", () => {
     const pump = { kind: "two-stage", approachFlowLpm: 10, pressingFlowLpm: 12, unloadBar: 50 } as const;
     expect(problemsOf({ ...BASE, pump })).toEqual(["pump.pressingFlowLpm"]);
-    const plate = { ...FULL.plate, grade: "S275" } as unknown as SizingInput["plate"];
-    expect(problemsOf({ ...FULL, plate })).toEqual(["plate.grade"]);
+    const plate = { ...FULL.plates![0], grade: "S275" } as unknown as SizingInput["plate"];
+    expect(problemsOf({ ...FULL, plate, plates: undefined })).toEqual(["plate.grade"]);
+    expect(problemsOf({ ...FULL, plate: FULL.plates![0] })).toEqual(["plates.0.role"]);
     const buckling = { endFixity: "hinged", exposedRodMm: 10 } as unknown as SizingInput["buckling"];
     expect(problemsOf({ ...FULL, buckling })).toEqual(["buckling.endFixity"]);
   });

@@ -53,7 +53,7 @@ describe("line checks against the metric ranges", () => {
   });
 
   it("the return line carries the cap-end oil on retract: more than the pump delivers", () => {
-    const flows = lineFlows({ approachLpm: 40, pressingLpm: 8 }, 2000, 1000);
+    const flows = lineFlows({ approachLpm: 40, pressingLpm: 8, reliefLpm: 8, largeUnloads: true }, 2000, 1000);
     expect(flows).toEqual({ suction: 40, pressure: 40, return: 80 }); // computed from formula (b)
   });
 

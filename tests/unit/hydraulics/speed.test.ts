@@ -26,7 +26,7 @@ describe("ram speed (reference §2)", () => {
 
   it("20 L/min on 4.00 cm² piston, 2.00 cm² annulus → 0.833 and 1.667 m/s", () => {
     // Source: [LC] learnchannel-tv.com (a data, b answers), printed rounding
-    const speeds = ramSpeeds({ approachLpm: 20, pressingLpm: 20 }, 400, 200);
+    const speeds = ramSpeeds({ approachLpm: 20, pressingLpm: 20, reliefLpm: 20, largeUnloads: false }, 400, 200);
     expectPrinted(speeds.advanceMmS / 1000, 0.833, 3);
     expectPrinted(speeds.retractMmS / 1000, 1.667, 3);
   });
@@ -47,16 +47,18 @@ describe("cylinder volume", () => {
 
 describe("pump stages and cycle time", () => {
   it("a single pump gives one flow to both stages; a two-stage pump its total and its small section", () => {
-    expect(pumpFlows({ kind: "single", flowLpm: 18 })).toEqual({ approachLpm: 18, pressingLpm: 18 });
-    expect(pumpFlows({ kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 50 })).toEqual({
+    expect(pumpFlows({ kind: "single", flowLpm: 18 }, 200, 210)).toEqual({ approachLpm: 18, pressingLpm: 18, reliefLpm: 18, largeUnloads: false });
+    expect(pumpFlows({ kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 8, unloadBar: 50 }, 200, 210)).toEqual({
       approachLpm: 40,
       pressingLpm: 8,
+      reliefLpm: 8,
+      largeUnloads: true,
     });
   });
 
   it("retract uses the annulus, so it is faster than advance at the same flow (trap 3)", () => {
     const cap = circleAreaMm2(100);
-    const speeds = ramSpeeds({ approachLpm: 30, pressingLpm: 6 }, cap, annulusAreaMm2(100, 50));
+    const speeds = ramSpeeds({ approachLpm: 30, pressingLpm: 6, reliefLpm: 6, largeUnloads: true }, cap, annulusAreaMm2(100, 50));
     expect(speeds.retractMmS).toBeGreaterThan(speeds.advanceMmS);
     expectRel(speeds.retractMmS / speeds.advanceMmS, 100 ** 2 / (100 ** 2 - 50 ** 2), 1e-12); // computed from formula (b)
   });

@@ -57,9 +57,9 @@ describe("traps", () => {
     expect(Math.round(lbf / 100) * 100).toBe(31_400);
   });
 
-  it("7. fixed–fixed buckling uses K = 0.5", () => {
+  it("7. fixed–fixed buckling never uses 0.25: the recommended design K is 0.65 (theory 0.5)", () => {
     const b = evaluateSizing({ ...PRESS, buckling: { endFixity: "fixed-fixed", exposedRodMm: 0 } }).buckling;
-    expect(b?.kFactor).toBe(0.5); // Source: [EZ] theory (a)
+    expect(b?.kFactor).toBe(0.65); // Source: AISC 360-22 Commentary Table C-A-7.1 (a)
   });
 
   it("8. yield drops with plate thickness", () => {

@@ -60,6 +60,51 @@ describe("as-built check", () => {
   });
 });
 
+describe("as-built check, second edition", () => {
+  const twoRams = (): InstalledPart[] => [
+    ...core(),
+    part("Second", { kind: "cylinder", boreMm: 100, rodMm: 50, strokeMm: 200, ratedPressureBar: 250, endFixity: "fixed-pinned" }),
+  ];
+
+  it("is incomplete, listing what is missing, until frame, ratings and buckling are recorded", () => {
+    const r = evaluateAsBuilt(figures, twoRams(), "metric");
+    if (!r.ready) throw new Error("expected a ready check");
+    expect(r.overall).toBe("incomplete");
+    expect(r.missingChecks.map((m) => m.id)).toEqual(
+      expect.arrayContaining(["rating-hose", "rating-valve", "plate-crosshead", "plate-bolster", "columns", "platen", "rod-buckling"]),
+    );
+  });
+
+  it("checks a recorded platen and names it when it is thin", () => {
+    const parts = [...twoRams(), part("Platen", { kind: "platen", rodSpacingMm: 400, dieWidthMm: 80, widthMm: 200, thicknessMm: 20, grade: "S235JR" })];
+    const r = evaluateAsBuilt(figures, parts, "metric");
+    if (!r.ready) throw new Error("expected a ready check");
+    expect(r.input.platen).toMatchObject({ rodSpacingMm: 400, dieWidthMm: 80 });
+    expect(r.checks.find((c) => c.id === "platen")?.level).toBe("fail");
+    expect(r.overall).toBe("fail");
+    expect(r.missingChecks.map((m) => m.id)).not.toContain("platen");
+  });
+
+  it("warns when a die's own limit is below the press's force at relief, naming the die and its gauge limit", () => {
+    // Hand calculation: 157.08 kN at relief; a 100 kN die → 100 × 10,000 / 7,854 = 127.3 bar on the gauge
+    const parts = [...core(), part("Drawing dies", { kind: "die", purpose: "Drawing out", maxForceKn: 100 })];
+    const r = evaluateAsBuilt(figures, parts, "metric");
+    const check = r.checks.find((c) => c.id === "die-limit-1");
+    expect(check?.level).toBe("warn");
+    expect(check?.message).toContain("Drawing dies");
+    expect(check?.message).toContain("127 bar");
+  });
+
+  it("reads an open frame's throat from a frame member with the role throat", () => {
+    const throat = part("Back", { kind: "frame-member", role: "throat", throatDepthMm: 150, lengthMm: 400, widthMm: 200, thicknessMm: 40, grade: "S355JR" });
+    const r = evaluateAsBuilt(figures, [...core(), throat], "metric");
+    if (!r.ready) throw new Error("expected a ready check");
+    expect(r.input.throat).toEqual({ depthMm: 150, heightMm: 400, sectionDepthMm: 200, thicknessMm: 40, grade: "S355JR" });
+    expect(r.checks.find((c) => c.id === "throat")).toBeDefined();
+    expect(r.missingChecks.map((m) => m.id)).not.toContain("columns");
+  });
+});
+
 describe("a planned press from a sizing", () => {
   it("carries the sizing's figures into components that evaluate to the same force", () => {
     const input = {

@@ -17,6 +17,7 @@ export default async function PressGaugeCardPage({ params }: { params: Promise<{
   const press = await orPageError(getPress(actor, pressId));
   const parts = await listComponents(actor, pressId);
   const cylinders = parts.flatMap((p) => (p.spec.kind === "cylinder" ? [p.spec] : []));
+  const dies = parts.flatMap((p) => (p.spec.kind === "die" && p.spec.maxForceKn !== undefined ? [{ name: p.label, maxForceKn: p.spec.maxForceKn }] : []));
   const relief = parts.flatMap((p) => (p.spec.kind === "relief-valve" ? [p.spec.settingBar] : []))[0] ?? press.reliefPressureBar;
   if (cylinders.length === 0 || !relief) {
     return (
@@ -36,7 +37,7 @@ export default async function PressGaugeCardPage({ params }: { params: Promise<{
         </Link>
         <PrintButton />
       </div>
-      <GaugeCard name={press.name} cylinders={{ count: cylinders.length, boreMm: cylinders[0]!.boreMm }} reliefBar={relief} system={user.unitSystem} />
+      <GaugeCard name={press.name} cylinders={{ count: cylinders.length, boreMm: cylinders[0]!.boreMm }} reliefBar={relief} system={user.unitSystem} dies={dies} />
     </div>
   );
 }

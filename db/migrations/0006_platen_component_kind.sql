@@ -1,0 +1,1 @@
+ALTER TABLE `components` MODIFY COLUMN `kind` enum('frame-member','crosshead','bolster','platen','cylinder','pump','motor','directional-valve','relief-valve','hose','filter','reservoir','gauge','die') NOT NULL;
