@@ -1,7 +1,8 @@
 /**
  * Benchmark: what the press gallery costs a signed-in member — list a press's photos through the
- * data layer (as the page and GET /api/presses/{id}/photos do), then fetch every thumbnail from
- * the upload service the way a browser would (6 at a time). Prints the median and p90 over
+ * data layer (as the page and GET /api/presses/{id}/photos do), then fetch every thumbnail the way
+ * a browser would (6 at a time): a relative link goes through the app's photo-file route (session,
+ * membership, private storage), an absolute one straight to the upload service. Prints the median and p90 over
  * several rounds; asserts nothing. Run with `npm run bench:gallery` against a test database
  * (DATABASE_URL → presswright_test, migrated); it starts its own upload fake on a free port.
  */
@@ -34,18 +35,29 @@ const { processPhoto } = await import("@/lib/photos/pipeline");
 const { storeJpegs } = await import("@/lib/uploads/storage");
 const { newId } = await import("@/lib/ids");
 const { pool } = await import("@/db/client");
+const { createSession } = await import("@/lib/auth/session");
+const { NextRequest } = await import("next/server");
+// The route exists once photos are private; before that every thumbnail URL is absolute.
+const photoFileRoute = await import("@/app/photo-files/[photoId]/[variant]/route").catch(() => null);
 
 function quantile(values: number[], q: number): number {
   const sorted = [...values].sort((a, b) => a - b);
   return sorted[Math.min(sorted.length - 1, Math.floor(q * sorted.length))]!;
 }
 
-async function fetchAll(urls: string[]): Promise<number> {
+async function get(url: string, cookie: string): Promise<Response> {
+  if (!url.startsWith("/")) return fetch(url);
+  const [, photoId, variant] = /^\/photo-files\/([^/]+)\/([^?]+)/.exec(url) ?? [];
+  if (!photoFileRoute || !photoId || !variant) throw new Error(`no route for ${url}`);
+  return photoFileRoute.GET(new NextRequest(`http://127.0.0.1:3000${url}`, { headers: { cookie } }), { params: Promise.resolve({ photoId, variant }) });
+}
+
+async function fetchAll(urls: string[], cookie: string): Promise<number> {
   let bytes = 0;
   let next = 0;
   const worker = async (): Promise<void> => {
     while (next < urls.length) {
-      const res = await fetch(urls[next++]!);
+      const res = await get(urls[next++]!, cookie);
       if (!res.ok) throw new Error(`thumbnail answered ${res.status}`);
       bytes += (await res.arrayBuffer()).byteLength;
     }
@@ -74,6 +86,7 @@ try {
     await createPhotoRecord(actor, { pressId, componentId: null }, { id, kind: "other", caption: null, full: image(full!, processed.full), thumb: image(thumb!, processed.thumb) });
   }
 
+  const cookie = `session=${(await createSession(userId)).token}`;
   const listMs: number[] = [];
   const totalMs: number[] = [];
   let bytes = 0;
@@ -81,7 +94,10 @@ try {
     const start = performance.now();
     const views = await listPressPhotos(actor, pressId);
     const listed = performance.now();
-    bytes = await fetchAll(views.map((v) => v.thumbUrl));
+    bytes = await fetchAll(
+      views.map((v) => v.thumbUrl),
+      cookie,
+    );
     const done = performance.now();
     if (round >= 2) {
       listMs.push(listed - start);
