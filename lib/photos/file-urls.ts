@@ -1,5 +1,5 @@
 import "server-only";
-import { createHmac, randomBytes, timingSafeEqual } from "node:crypto";
+import { createHmac, hkdfSync, randomBytes, timingSafeEqual } from "node:crypto";
 
 /**
  * Links to photo files (hardening #8). Photos are stored private at the upload service; a page
@@ -9,9 +9,7 @@ import { createHmac, randomBytes, timingSafeEqual } from "node:crypto";
  *
  * `exp` is rounded up to a step of a quarter of the lifetime, so the same photo keeps the same URL
  * for a while (browser cache hits across list refreshes) and every URL lives between 1 and 1¼
- * lifetimes. PHOTO_URL_TTL_S sets the lifetime (default 15 min); PHOTO_URL_SECRET the HMAC key —
- * set it in production when several app instances serve the same users; without it each process
- * makes its own random key (links then end with the process, and a reload gives new ones).
+ * lifetimes. PHOTO_URL_TTL_S sets the lifetime (default 15 min); the HMAC key: see signingKey.
  */
 export const PHOTO_VARIANTS = ["full", "thumb"] as const;
 export type PhotoVariant = (typeof PHOTO_VARIANTS)[number];
@@ -28,12 +26,30 @@ export function photoUrlTtlS(): number {
   return Number.isFinite(configured) && configured >= 5 ? Math.min(Math.round(configured), MAX_TTL_S) : DEFAULT_TTL_S;
 }
 
-let processKey: Buffer | null = null;
+// On globalThis: Next.js bundles this module separately for pages and route handlers, and they
+// must sign and check with the same key.
+const PROCESS_KEY = Symbol.for("presswright.photo-link-key");
+type KeyHolder = { [PROCESS_KEY]?: Buffer };
+
+/**
+ * PHOTO_URL_SECRET when set; otherwise a key derived (HKDF-SHA-256, its own label) from the upload
+ * service's token, which every instance of the app already holds — so links work across instances
+ * and restarts without another secret to manage; with neither, a random key for this process.
+ */
 function signingKey(): Buffer {
+  const holder = globalThis as KeyHolder;
+  const cached = holder[PROCESS_KEY];
+  if (cached) return cached;
   const configured = process.env.PHOTO_URL_SECRET;
-  if (configured && configured.length >= 32) return Buffer.from(configured, "utf8");
-  processKey ??= randomBytes(32);
-  return processKey;
+  const token = process.env.UPLOADTHING_TOKEN;
+  const key =
+    configured && configured.length >= 32
+      ? Buffer.from(configured, "utf8")
+      : token
+        ? Buffer.from(hkdfSync("sha256", token, "presswright", "photo-file-links v1", 32))
+        : randomBytes(32);
+  holder[PROCESS_KEY] = key;
+  return key;
 }
 
 function signature(photoId: string, variant: PhotoVariant, exp: number): string {

@@ -33,7 +33,6 @@ const HOSTILE_NEXT = [
   "/%00/evil.example",
   "/.%5Cevil.example",
   "%2F%2Fevil.example",
-  "/%E2%80%A8/evil.example",
 ];
 
 async function signInWithNext(page: Page, next: string): Promise<string> {
@@ -56,6 +55,14 @@ describe("after sign-in, `next` never leads off the site (#1)", () => {
     await page.goto(`/sign-in?next=${next}`);
     await page.waitForLoadState("load");
     expect(new URL(page.url()).origin).toBe(ORIGIN);
+    await context.close();
+  });
+
+  it("follows an odd path only on our own origin", async () => {
+    const { context, page } = await newPage(browser);
+    // U+2028 is not stripped by the URL parser: this is a (missing) page of ours, not another host.
+    const landed = await signInWithNext(page, "/%E2%80%A8/evil.example");
+    expect(new URL(landed).origin).toBe(ORIGIN);
     await context.close();
   });
 

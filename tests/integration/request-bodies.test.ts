@@ -1,7 +1,7 @@
-// Hardening #2: no route reads a body whole before its limit. A declared Content-Length over the
+// Hardening #2 (and the path half of #5): no route reads a body whole before its limit. A declared Content-Length over the
 // limit is refused before reading; a chunked body is cancelled as soon as it passes the limit (the
 // test counts how much of an endless stream was pulled). The production wrapper's overall cap
-// (scripts/lib/body-cap.mjs) is tested on a plain node:http server. The memory figure under 20
+// (scripts/lib/request-guards.mjs) is tested on a plain node:http server. The memory figure under 20
 // concurrent oversized requests comes from `npm run bench:body-limit`, never from a timed assertion.
 import { createServer, request as httpRequest, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
@@ -11,7 +11,7 @@ import { POST as signInRoute } from "@/app/api/auth/sign-in/route";
 import { POST as sizingRoute } from "@/app/api/sizing/route";
 import { JSON_BODY_LIMIT, readJsonBody } from "@/lib/http";
 // @ts-expect-error -- plain ES module of the production server, no type declarations
-import { capRequestBody } from "@/scripts/lib/body-cap.mjs";
+import { capRequestBody, refuseMalformedPath } from "@/scripts/lib/request-guards.mjs";
 
 const noContext = {} as never;
 const CHUNK = 16 * 1024;
@@ -81,7 +81,7 @@ describe("readJsonBody", () => {
   });
 });
 
-describe("the production server's overall cap (scripts/lib/body-cap.mjs)", () => {
+describe("the production server's overall cap (scripts/lib/request-guards.mjs)", () => {
   const CAP = 256 * 1024;
   let server: Server;
   let port = 0;
@@ -89,7 +89,7 @@ describe("the production server's overall cap (scripts/lib/body-cap.mjs)", () =>
 
   beforeAll(async () => {
     server = createServer((req, res) => {
-      if (!capRequestBody(req, res, CAP)) return;
+      if (!refuseMalformedPath(req, res) || !capRequestBody(req, res, CAP)) return;
       let size = 0;
       req.on("data", (c: Buffer) => (size += c.length));
       req.on("end", () => {
@@ -135,6 +135,15 @@ describe("the production server's overall cap (scripts/lib/body-cap.mjs)", () =>
     const before = bodiesRead;
     expect(await send(CHUNK, String(200 * 1024 * 1024))).toBe(413);
     expect(bodiesRead).toBe(before);
+  });
+
+  it("answers 400 to a path with a malformed percent-escape (Next.js alone answers 500)", async () => {
+    for (const path of ["/api/presses/%ff", "/api/photos/%E0%A4%A", "/%"]) {
+      const res = await fetch(`http://127.0.0.1:${port}${path}`);
+      expect(res.status, path).toBe(400);
+      expect(((await res.json()) as { error: string }).error).toMatch(/percent-escape/);
+    }
+    expect((await fetch(`http://127.0.0.1:${port}/api/presses/%41?q=%ff`)).status).toBe(200);
   });
 
   it("cuts off a chunked body that passes the cap", async () => {

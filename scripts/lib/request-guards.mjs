@@ -1,4 +1,9 @@
-// The production server's overall cap on request bodies (scripts/server.mjs). A declared
+// Guards the production server (scripts/server.mjs) applies before Next.js sees a request.
+//
+// A path with a malformed percent-escape (/api/presses/%ff) cannot name anything; Next.js answers
+// it with a bare 500 from its router, so it is answered 400 here, the one place every path passes.
+//
+// The overall cap on request bodies: a declared
 // Content-Length over the cap is answered 413 before a byte is read; a chunked body is counted as
 // Node's HTTP parser hands it over (IncomingMessage#push) and cut off as soon as it passes the cap,
 // so no route — however it reads its body — can be made to buffer more than the cap.
@@ -34,4 +39,17 @@ export function capRequestBody(req, res, maxBytes) {
     return push.call(this, chunk, encoding);
   };
   return true;
+}
+
+/** Answers 400 and returns false when the path holds a malformed percent-escape. */
+export function refuseMalformedPath(req, res) {
+  const path = (req.url ?? "/").split("?", 1)[0];
+  try {
+    decodeURIComponent(path);
+    return true;
+  } catch {
+    res.writeHead(400, { "content-type": "application/json" });
+    res.end(JSON.stringify({ error: "The address contains a malformed percent-escape." }));
+    return false;
+  }
 }
