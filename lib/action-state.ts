@@ -11,9 +11,8 @@ export const initialActionState: ActionState = { ok: false };
 
 /** Plain string values of a form, without the fields named in `secret`. */
 export function echoValues(form: FormData, secret: readonly string[] = []): Record<string, string> {
-  const out: Record<string, string> = {};
-  for (const [key, value] of form.entries()) {
-    if (typeof value === "string" && !secret.includes(key) && !key.startsWith("$ACTION")) out[key] = value;
-  }
-  return out;
+  // Keys are the client's: Object.fromEntries defines own properties, so "__proto__" stays a key.
+  return Object.fromEntries(
+    [...form.entries()].filter((e): e is [string, string] => typeof e[1] === "string" && !secret.includes(e[0]) && !e[0].startsWith("$ACTION")),
+  );
 }

@@ -6,6 +6,64 @@ import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
 import { ConflictError, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
+
+/** Largest JSON body any route reads: the biggest real one (a full sizing input) is about 1 kB. */
+export const JSON_BODY_LIMIT = 64 * 1024;
+/** fieldErrors key for problems with the request body as a whole. */
+export const BODY_FIELD = "body";
+
+/** A body over the limit (answered 413); raised before the excess is read. */
+export class PayloadTooLargeError extends Error {
+  constructor(readonly limit: number) {
+    super("Request body too large.");
+    this.name = "PayloadTooLargeError";
+  }
+}
+
+/** A body that is not JSON (answered 400). */
+export class MalformedBodyError extends Error {
+  constructor() {
+    super("Request body is not valid JSON.");
+    this.name = "MalformedBodyError";
+  }
+}
+
+/**
+ * Reads a JSON request body without ever holding more than `limit` bytes: a declared
+ * Content-Length over the limit is refused before reading, and a chunked body is cancelled as soon
+ * as it passes the limit; an empty body is not JSON either. Every route
+ * reads JSON through this, never `req.json()`.
+ */
+export async function readJsonBody(req: Request, limit: number = JSON_BODY_LIMIT): Promise<unknown> {
+  const text = await readBodyText(req, limit);
+  try {
+    return JSON.parse(text) as unknown;
+  } catch {
+    throw new MalformedBodyError();
+  }
+}
+
+/** The body as text, read under `limit` as readJsonBody does (for routes that hand it on verbatim). */
+export async function readBodyText(req: Request, limit: number = JSON_BODY_LIMIT): Promise<string> {
+  const declared = req.headers.get("content-length");
+  if (declared !== null && !(/^\d+$/.test(declared) && Number(declared) <= limit)) throw new PayloadTooLargeError(limit);
+  if (!req.body) return "";
+  const reader = req.body.getReader();
+  const chunks: Uint8Array[] = [];
+  let size = 0;
+  for (;;) {
+    const { done, value } = await reader.read();
+    if (done) break;
+    size += value.byteLength;
+    if (size > limit) {
+      await reader.cancel().catch(() => undefined);
+      throw new PayloadTooLargeError(limit);
+    }
+    chunks.push(value);
+  }
+  return Buffer.concat(chunks).toString("utf8");
+}
 
 export function jsonError(status: number, error: string, extra?: Record<string, unknown>, init?: ResponseInit): NextResponse {
   return NextResponse.json({ error, ...extra }, { ...init, status });
@@ -58,8 +116,16 @@ export function errorResponse(error: unknown): NextResponse {
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
   if (error instanceof ConflictError) return jsonError(409, error.message);
   if (error instanceof z.ZodError) {
-    return jsonError(400, "Invalid request.", { fieldErrors: z.flattenError(error).fieldErrors });
+    return jsonError(400, "Invalid request.", { fieldErrors: fieldErrorsOf(error.issues, BODY_FIELD) });
   }
+  if (error instanceof PayloadTooLargeError) {
+    return jsonError(413, error.message, { fieldErrors: { [BODY_FIELD]: [`Send at most ${Math.round(error.limit / 1024)} kB of JSON.`] } });
+  }
+  if (error instanceof MalformedBodyError) {
+    return jsonError(400, error.message, { fieldErrors: { [BODY_FIELD]: ["Send a JSON object."] } });
+  }
+  // A path with a malformed percent-escape (/api/presses/%ff) cannot name anything: the client's fault.
+  if (error instanceof URIError) return jsonError(400, "The address contains a malformed percent-escape.");
   if (isDatabaseUnavailable(error)) {
     return jsonError(503, DATABASE_UNAVAILABLE_MESSAGE, undefined, { headers: { "Retry-After": "5" } });
   }

@@ -28,6 +28,14 @@ export interface RateLimitResult {
 /** The public sizing API: generous for a person or a script, a wall for a flood. */
 export const SIZING_API_LIMIT: RateLimitPolicy = { name: "sizing-api", limit: 120, windowMs: 60_000 };
 
+/**
+ * Sign-up, per address and per client IP: the form answers the same whether or not an address has
+ * an account, and these keep it from being used to mail an address's owner (or to create
+ * accounts) in bulk.
+ */
+export const SIGN_UP_ADDRESS_LIMIT: RateLimitPolicy = { name: "sign-up-address", limit: 5, windowMs: 60 * 60_000 };
+export const SIGN_UP_IP_LIMIT: RateLimitPolicy = { name: "sign-up-ip", limit: 30, windowMs: 60 * 60_000 };
+
 /** Rows of windows that ended this long ago are swept now and then. */
 const KEEP_MS = 60 * 60 * 1000;
 /** Share of new windows that also sweep other buckets' stale rows (the sweep scans the table). */

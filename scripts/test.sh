@@ -54,7 +54,8 @@ browser_tests() {
   fresh_test_database
   npx tsx db/seed.ts --quiet
   assert_port_free "$TEST_PORT" || return 1
-  NODE_ENV=production INSECURE_COOKIES=1 PORT="$TEST_PORT" node scripts/server.mjs >"$RESULTS/server.log" 2>&1 &
+  # Short photo links, so the browser test can watch one expire (lib/photos/file-urls.ts).
+  NODE_ENV=production INSECURE_COOKIES=1 PHOTO_URL_TTL_S=20 PORT="$TEST_PORT" node scripts/server.mjs >"$RESULTS/server.log" 2>&1 &
   SERVER_PID=$!
   node scripts/wait-for-health.mjs "http://127.0.0.1:$TEST_PORT/api/health" 90 || { cat "$RESULTS/server.log"; return 1; }
   kill -0 "$SERVER_PID" 2>/dev/null || { cat "$RESULTS/server.log"; return 1; }

@@ -77,6 +77,8 @@ function PhotoDetails({ photo, canChange, onClose, onChanged }: Props & { photo:
           height={photo.height}
           sizes="(max-width: 896px) 100vw, 896px"
           loading="eager"
+          // A short-lived, session-checked app link: the image optimizer (no cookies) cannot fetch it.
+          unoptimized
           className="h-auto max-h-[65dvh] w-full object-contain"
         />
       </div>

@@ -18,12 +18,14 @@ type Props = {
   /** Whether to offer the uploader (members of the shop, press not retired). */
   canAttach: boolean;
   parts?: PartOption[];
+  /** Photo links expire (lib/photos/file-urls.ts): the list is fetched again well before they do. */
+  refreshMs: number;
 };
 
 /** The press page's photos: upload, filter by kind, open one large, edit or delete it. */
-export function PressGallery({ pressId, initial, currentUserId, canManage, canAttach, parts }: Props) {
+export function PressGallery({ pressId, initial, currentUserId, canManage, canAttach, parts, refreshMs }: Props) {
   const url = pressPhotosUrl(pressId);
-  const { data, error, mutate } = useSWR<{ photos: PhotoItem[] }>(url, fetchJson, { fallbackData: { photos: initial } });
+  const { data, error, mutate } = useSWR<{ photos: PhotoItem[] }>(url, fetchJson, { fallbackData: { photos: initial }, refreshInterval: refreshMs });
   const [kind, setKind] = useState<PhotoKind | "all">("all");
   const [openId, setOpenId] = useState<string | null>(null);
 
@@ -77,6 +79,8 @@ export function PressGallery({ pressId, initial, currentUserId, canManage, canAt
                     width={p.thumbWidth}
                     height={p.thumbHeight}
                     sizes="(max-width: 640px) 50vw, (max-width: 1024px) 33vw, 240px"
+                    // Thumbnails are small server-made JPEGs behind a session-checked link: served as they are.
+                    unoptimized
                     className="aspect-[4/3] w-full object-cover transition-opacity hover:opacity-90"
                   />
                 </button>

@@ -2,6 +2,7 @@ import { Card } from "@/components/ui/card";
 import { can, type Role } from "@/lib/auth/permissions";
 import { listComponents } from "@/lib/data/components";
 import { listPressPhotos } from "@/lib/data/photos";
+import { photoUrlTtlS } from "@/lib/photos/file-urls";
 import { PressGallery } from "./press-gallery";
 
 type Props = { pressId: string; userId: string; role: Role; retired: boolean };
@@ -21,6 +22,7 @@ export async function PressPhotos({ pressId, userId, role, retired }: Props) {
         canManage={can(role, "editAnyPhoto")}
         canAttach={canAttach}
         parts={parts.map((c) => ({ id: c.id, label: c.label }))}
+        refreshMs={(photoUrlTtlS() * 1000) / 2}
       />
     </Card>
   );

@@ -1,9 +1,10 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { redirect } from "next/navigation";
+import { notFound, redirect } from "next/navigation";
 import { assertSameOriginAction, clearSessionCookie } from "@/lib/auth/action-guard";
 import { getCurrentSession, requireSignedIn } from "@/lib/auth/current";
+import { NotFoundError } from "@/lib/auth/permissions";
 import { invalidateSession } from "@/lib/auth/session";
 import { recordAudit } from "@/lib/data/audit";
 import { switchActiveShop } from "@/lib/data/shops";
@@ -23,7 +24,14 @@ export async function switchShopAction(form: FormData): Promise<void> {
   await assertSameOriginAction();
   const { user } = await requireSignedIn();
   const shopId = form.get("shopId");
-  if (typeof shopId === "string") await switchActiveShop({ userId: user.id }, shopId);
+  if (typeof shopId !== "string") notFound();
+  try {
+    await switchActiveShop({ userId: user.id }, shopId);
+  } catch (error) {
+    // A shop the user is not in (or a made-up id) is not found, not a server error.
+    if (error instanceof NotFoundError) notFound();
+    throw error;
+  }
   revalidatePath("/", "layout");
   redirect("/dashboard");
 }

@@ -54,7 +54,14 @@ export const components = mysqlTable(
   (t) => [index("components_press_idx").on(t.pressId, t.removedOn)],
 );
 
-/** Hour-meter readings: a log of its own that never goes backwards (checked under a row lock). */
+export const HOUR_ENTRY_KINDS = ["reading", "correction"] as const;
+
+/**
+ * Hour-meter readings: a log of its own that never goes backwards (checked under a row lock).
+ * A manager's correction is an entry of its own (kind "correction", with who and why) that voids
+ * the wrong readings above it (`voided_by` = the correction's id): they stay in the history, and
+ * the entries that are not voided stay monotonic.
+ */
 export const hourMeterReadings = mysqlTable(
   "hour_meter_readings",
   {
@@ -66,6 +73,8 @@ export const hourMeterReadings = mysqlTable(
     readAt: utc("read_at").notNull(),
     recordedBy: varchar("recorded_by", { length: ID_LENGTH }).references(() => users.id, { onDelete: "set null" }),
     note: varchar("note", { length: 255 }),
+    kind: mysqlEnum("kind", HOUR_ENTRY_KINDS).notNull().default("reading"),
+    voidedBy: bigint("voided_by", { mode: "number", unsigned: true }),
   },
   (t) => [index("hour_readings_press_idx").on(t.pressId, t.readAt)],
 );

@@ -19,6 +19,8 @@ export const ACTIONS = {
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
   recordHours: ["manager", "inspector", "member"],
+  /** Correct a wrong hour-meter reading (kept in the history with who and why). */
+  correctHours: ["manager"],
   logService: ["manager"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],

@@ -13,3 +13,8 @@ export function waitAfter(scope: Scope, failures: number): number {
   return Math.min(maxWaitS, baseWaitS * 2 ** (failures - free));
 }
 
+
+/** A wait in words for a refusal message: "45 seconds", "3 minutes". */
+export function formatWait(seconds: number): string {
+  return seconds < 90 ? `${seconds} seconds` : `${Math.ceil(seconds / 60)} minutes`;
+}

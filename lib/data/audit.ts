@@ -11,8 +11,8 @@ export type AuditEntry = {
 };
 
 /** Appends to the audit log. Authorization: callers record their own actions; nothing reads it back in the app. */
-export async function recordAudit(entry: AuditEntry): Promise<void> {
-  await db.insert(auditLog).values({
+export async function recordAudit(entry: AuditEntry, executor: Pick<typeof db, "insert"> = db): Promise<void> {
+  await executor.insert(auditLog).values({
     action: entry.action,
     userId: entry.userId ?? null,
     shopId: entry.shopId ?? null,

@@ -3,13 +3,14 @@ import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { components, photos, users } from "@/db/schema";
 import { canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { photoFileUrl, type PhotoVariant } from "@/lib/photos/file-urls";
 import type { PhotoKind } from "@/lib/photos/kinds";
 import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
 import type { PhotoPatch } from "@/lib/validation/photo";
 import type { Actor } from "./actor";
 import { assertNotRetired, pressAccess, type Executor } from "./press-access";
 
-/** What the gallery shows of a photo: no storage keys, the uploader by name. */
+/** What the gallery shows of a photo: no storage keys or storage URLs, the uploader by name. */
 export type PhotoView = {
   id: string;
   pressId: string;
@@ -42,10 +43,8 @@ const viewColumns = {
   caption: photos.caption,
   uploadedBy: photos.uploadedBy,
   uploaderName: users.displayName,
-  url: photos.fileUrl,
   width: photos.width,
   height: photos.height,
-  thumbUrl: photos.thumbUrl,
   thumbWidth: photos.thumbWidth,
   thumbHeight: photos.thumbHeight,
   createdAt: photos.createdAt,
@@ -113,12 +112,19 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
   return { id: photo.id };
 }
 
+/** Files are private at the storage service: a view carries short-lived app links (lib/photos/file-urls). */
+function withFileUrls(row: Omit<PhotoView, "url" | "thumbUrl">, now = Date.now()): PhotoView {
+  return { ...row, url: photoFileUrl(row.id, "full", now).url, thumbUrl: photoFileUrl(row.id, "thumb", now).url };
+}
+
 /** A press's photos, newest first, optionally of one kind. Authorization: members of its shop. */
 export async function listPressPhotos(actor: Actor, pressId: string, options: { kind?: PhotoKind } = {}): Promise<PhotoView[]> {
   await pressAccess(db, actor, pressId, "viewPress");
-  return selectViews()
+  const rows = await selectViews()
     .where(and(eq(photos.pressId, pressId), options.kind ? eq(photos.kind, options.kind) : undefined))
     .orderBy(desc(photos.createdAt), desc(photos.id));
+  const now = Date.now();
+  return rows.map((row) => withFileUrls(row, now));
 }
 
 /** One photo. Authorization: members of its press's shop; anyone else gets NotFoundError. */
@@ -126,7 +132,22 @@ export async function getPhoto(actor: Actor, photoId: string): Promise<PhotoView
   const [view] = await selectViews().where(eq(photos.id, photoId)).limit(1);
   if (!view) throw new NotFoundError("Photo not found");
   await pressAccess(db, actor, view.pressId, "viewPress");
-  return view;
+  return withFileUrls(view);
+}
+
+/**
+ * The storage key of one of a photo's files, for the route that streams it. Authorization:
+ * members of its press's shop; another shop's photo (or an unknown id) is NotFoundError.
+ */
+export async function photoFileKey(actor: Actor, photoId: string, variant: PhotoVariant): Promise<string> {
+  const [row] = await db
+    .select({ pressId: photos.pressId, fileKey: photos.fileKey, thumbKey: photos.thumbKey })
+    .from(photos)
+    .where(eq(photos.id, photoId))
+    .limit(1);
+  if (!row) throw new NotFoundError("Photo not found");
+  await pressAccess(db, actor, row.pressId, "viewPress");
+  return variant === "thumb" ? row.thumbKey : row.fileKey;
 }
 
 /** The photo's press, storage keys and whether the actor may change it (uploader or manager). */

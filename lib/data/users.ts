@@ -2,9 +2,9 @@ import "server-only";
 import { eq } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, shops, users } from "@/db/schema";
-import { hashPassword, verifyPassword } from "@/lib/auth/password";
+import { hashPassword } from "@/lib/auth/password";
 import { createSession, invalidateUserSessions } from "@/lib/auth/session";
-import { normaliseEmail } from "@/lib/auth/sign-in";
+import { checkPasswordThrottled, normaliseEmail } from "@/lib/auth/sign-in";
 import { newId } from "@/lib/ids";
 import type { Actor } from "./actor";
 import { recordAudit } from "./audit";
@@ -59,7 +59,10 @@ export function isDuplicateKey(error: unknown): boolean {
 }
 
 
-export type PasswordChangeResult = { ok: true; token: string } | { ok: false; reason: "wrong-current" };
+export type PasswordChangeResult =
+  | { ok: true; token: string }
+  | { ok: false; reason: "wrong-current" }
+  | { ok: false; reason: "throttled"; retryAfterS: number };
 
 /**
  * Changes the actor's own password after checking the current one, ends every session of the
@@ -70,13 +73,14 @@ export async function changePassword(
   input: { currentPassword: string; newPassword: string; ip: string },
 ): Promise<PasswordChangeResult> {
   const [user] = await db
-    .select({ passwordHash: users.passwordHash })
+    .select({ id: users.id, email: users.email, passwordHash: users.passwordHash })
     .from(users)
     .where(eq(users.id, actor.userId))
     .limit(1);
-  if (!user || !(await verifyPassword(user.passwordHash, input.currentPassword))) {
-    return { ok: false, reason: "wrong-current" };
-  }
+  if (!user) return { ok: false, reason: "wrong-current" };
+  // Same throttle as sign-in: a stolen session must not allow unlimited guesses.
+  const check = await checkPasswordThrottled({ email: user.email, ip: input.ip, password: input.currentPassword, user, action: "password.confirm" });
+  if (!check.ok) return check.reason === "throttled" ? check : { ok: false, reason: "wrong-current" };
   const passwordHash = await hashPassword(input.newPassword);
   await db.update(users).set({ passwordHash }).where(eq(users.id, actor.userId));
   await invalidateUserSessions(actor.userId);

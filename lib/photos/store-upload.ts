@@ -3,7 +3,7 @@ import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { createPhotoRecord, type PhotoTarget, type StoredImage } from "@/lib/data/photos";
 import { ConflictError } from "@/lib/errors";
 import { newId } from "@/lib/ids";
-import { deleteStoredFiles, deleteStoredFilesQuietly, StorageUnavailableError, storeJpegs } from "@/lib/uploads/storage";
+import { deleteStoredFiles, deleteStoredFilesQuietly, fetchStoredFile, StorageUnavailableError, storeJpegs } from "@/lib/uploads/storage";
 import type { PhotoKind } from "./kinds";
 import { checkUploadSize, PhotoRejectedError } from "./limits";
 import { processPhoto, type EncodedPhoto } from "./pipeline";
@@ -15,10 +15,9 @@ export type PhotoUploadResult = { photoId: string } | { error: string };
 
 const FAILED = "The photo could not be stored. Please try again.";
 
-async function fetchOriginal(url: string, declaredSize: number): Promise<Uint8Array> {
+async function fetchOriginal(key: string, declaredSize: number): Promise<Uint8Array> {
   checkUploadSize(declaredSize);
-  const res = await fetch(url);
-  if (!res.ok) throw new StorageUnavailableError("read the uploaded photo", { cause: `GET ${url}: ${res.status}` });
+  const res = await fetchStoredFile(key);
   const length = Number(res.headers.get("content-length") ?? 0);
   if (length) checkUploadSize(length);
   const bytes = new Uint8Array(await res.arrayBuffer());
@@ -53,7 +52,7 @@ export async function storeUploadedPhoto(
 ): Promise<PhotoUploadResult> {
   const toDelete = new Set([original.key]);
   try {
-    const processed = await processPhoto(await fetchOriginal(original.ufsUrl, original.size));
+    const processed = await processPhoto(await fetchOriginal(original.key, original.size));
     const id = newId();
     const [full, thumb] = await storeJpegs(
       [

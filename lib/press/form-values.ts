@@ -6,13 +6,13 @@
 import { fromDisplay, parseNumberInput, toDisplay, type QuantityKind, type UnitSystem } from "@/lib/units";
 import { SPEC_FIELDS } from "./component-fields";
 import type { ComponentKind } from "@/lib/validation/component-spec";
+import { fieldErrorsOf, type FieldErrors } from "@/lib/validation/field-errors";
+import { echoValues } from "@/lib/action-state";
 
 export type FormValues = Record<string, string>;
 
 export function formValues(form: FormData): FormValues {
-  const out: FormValues = {};
-  for (const [key, value] of form.entries()) if (typeof value === "string" && !key.startsWith("$ACTION")) out[key] = value;
-  return out;
+  return echoValues(form);
 }
 
 /** A typed quantity → SI number; "" → undefined; not a number → the text (the schema rejects it). */
@@ -54,13 +54,8 @@ export function centsValue(text: string | undefined): number | string | null {
 }
 
 /** zod issue paths → form field names ("spec.boreMm"). */
-export function fieldErrorsFrom(issues: readonly { path: readonly PropertyKey[]; message: string }[]): Record<string, string[]> {
-  const out: Record<string, string[]> = {};
-  for (const issue of issues) {
-    const key = issue.path.map(String).join(".") || "form";
-    (out[key] ??= []).push(issue.message);
-  }
-  return out;
+export function fieldErrorsFrom(issues: Parameters<typeof fieldErrorsOf>[0]): FieldErrors {
+  return fieldErrorsOf(issues);
 }
 
 /** An SI value shown in a form field in the user's units, trimmed of float noise. */

@@ -8,7 +8,7 @@ export type TimelineEvent = {
 };
 
 type Part = { id: string; label: string; installedOn: string | null; removedOn: string | null; removalReason: string | null; replacedById: string | null };
-type Reading = { hours: number; readAt: Date; note: string | null };
+type Reading = { hours: number; readAt: Date; note: string | null; kind?: "reading" | "correction"; voided?: boolean; recordedByName?: string | null };
 
 export function pressTimeline(created: Date, parts: Part[], readings: Reading[]): TimelineEvent[] {
   const byId = new Map(parts.map((p) => [p.id, p]));
@@ -26,7 +26,12 @@ export function pressTimeline(created: Date, parts: Part[], readings: Reading[])
     }
   }
   for (const r of readings) {
-    events.push({ on: r.readAt.toISOString().slice(0, 10), kind: "hours", title: `Hour meter read ${r.hours} h`, detail: r.note ?? undefined });
+    const by = r.recordedByName ? ` by ${r.recordedByName}` : "";
+    const title =
+      r.kind === "correction"
+        ? `Hour meter corrected to ${r.hours} h${by}`
+        : `Hour meter read ${r.hours} h${r.voided ? " (replaced by a correction)" : ""}`;
+    events.push({ on: r.readAt.toISOString().slice(0, 10), kind: "hours", title, detail: r.note ?? undefined });
   }
   // Newest first; on the same day a removal reads before the installation of its successor.
   const order = { created: 0, installed: 1, hours: 2, removed: 3, replaced: 3 } as const;

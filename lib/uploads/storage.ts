@@ -26,7 +26,11 @@ export class StorageUnavailableError extends Error {
 export async function storeJpegs(files: { name: string; data: Buffer }[], onStored: (key: string) => void): Promise<StoredFile[]> {
   let results;
   try {
-    results = await utapi().uploadFiles(files.map((f) => new UTFile([new Uint8Array(f.data)], f.name, { type: "image/jpeg" })));
+    // Private: the service serves them only through signed URLs, which only the app hands out.
+    results = await utapi().uploadFiles(
+      files.map((f) => new UTFile([new Uint8Array(f.data)], f.name, { type: "image/jpeg" })),
+      { acl: "private" },
+    );
   } catch (cause) {
     throw new StorageUnavailableError("store the photo", { cause });
   }
@@ -40,6 +44,25 @@ export async function storeJpegs(files: { name: string; data: Buffer }[], onStor
   const failed = results.find((r) => r.error);
   if (failed?.error) throw new StorageUnavailableError("store the photo", { cause: failed.error });
   return stored;
+}
+
+/** Lifetime of a storage URL the server signs for itself (never handed to a browser). */
+const SERVER_FETCH_URL_TTL_S = 60;
+
+/**
+ * Fetches a stored file through a short-lived signed URL (files are private). Signing needs no
+ * request to the service. Throws StorageUnavailableError when the service does not answer 2xx.
+ */
+export async function fetchStoredFile(key: string): Promise<Response> {
+  let res: Response;
+  try {
+    const { ufsUrl } = await utapi().generateSignedURL(key, { expiresIn: SERVER_FETCH_URL_TTL_S });
+    res = await fetch(ufsUrl);
+  } catch (cause) {
+    throw new StorageUnavailableError("read the photo", { cause });
+  }
+  if (!res.ok) throw new StorageUnavailableError("read the photo", { cause: `GET ${key}: ${res.status}` });
+  return res;
 }
 
 /** Deletes stored files; throws StorageUnavailableError when the service does not confirm it. */

@@ -23,8 +23,10 @@ export const photoUploadInputSchema = z.strictObject({
 });
 export type PhotoUploadInput = z.input<typeof photoUploadInputSchema>;
 
-export const photoPatchSchema = z
-  .strictObject({ caption: captionSchema.nullable().optional(), kind: photoKindSchema.optional() })
+/** The fields a photo PATCH may carry (no defaults: a PATCH changes only what it sends). */
+export const photoPatchFields = z.strictObject({ caption: captionSchema.nullable().optional(), kind: photoKindSchema.optional() });
+
+export const photoPatchSchema = photoPatchFields
   .refine((patch) => patch.caption !== undefined || patch.kind !== undefined, "Change the caption or the kind.");
 export type PhotoPatch = z.infer<typeof photoPatchSchema>;
 

@@ -11,6 +11,7 @@ import * as z from "zod/mini";
 import { INPUT_LIMITS, type InputProblem } from "@/lib/hydraulics";
 import type { PlateInput, PlatenInput, SizingInput, ThroatInput } from "@/lib/hydraulics/types";
 import { MIN_BORE_MINUS_ROD_MM } from "@/lib/hydraulics/validate";
+import { fieldErrorsOf } from "./field-errors";
 
 const L = INPUT_LIMITS;
 type Limit = readonly [number, number];
@@ -311,28 +312,15 @@ export const sizingInputSchema: z.ZodMiniType<SizingInput> = sizingObject;
 export type SizingFieldErrors = Record<string, string[]>;
 export const BODY_KEY = "body";
 
-function push(out: SizingFieldErrors, path: string, message: string): void {
-  const key = path || BODY_KEY;
-  (out[key] ??= []).push(message);
-}
-
-/** One entry per field, unknown keys each under their own path. */
+/** One entry per field, unknown keys each under their own path (see lib/validation/field-errors). */
 export function sizingFieldErrors(error: z.core.$ZodError): SizingFieldErrors {
-  const out: SizingFieldErrors = {};
-  for (const issue of error.issues) {
-    const base = issue.path.map(String);
-    if (issue.code === "unrecognized_keys") {
-      for (const key of issue.keys) push(out, [...base, key].join("."), `Unknown field "${key}".`);
-    } else {
-      push(out, base.join("."), issue.message);
-    }
-  }
-  return out;
+  return fieldErrorsOf(error.issues, BODY_KEY);
 }
 
 /** The engine's own refusals (SizingInputError) in the same shape. */
 export function problemFieldErrors(problems: readonly InputProblem[]): SizingFieldErrors {
-  const out: SizingFieldErrors = {};
-  for (const p of problems) push(out, p.path, `${p.path} ${p.message}.`);
-  return out;
+  return fieldErrorsOf(
+    problems.map((p) => ({ path: p.path ? p.path.split(".") : [], message: `${p.path} ${p.message}.` })),
+    BODY_KEY,
+  );
 }

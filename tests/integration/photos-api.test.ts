@@ -7,7 +7,7 @@ import { GET as listRoute } from "@/app/api/presses/[pressId]/photos/route";
 import type { PhotoView } from "@/lib/data/photos";
 import { GPS_EXIF, noisyJpeg } from "../fixtures/images";
 import { getRequest, jsonRequest } from "./helpers";
-import { jpegFile, photoRows, setupPhotoUploads, storedKeys, upload, type PhotoContext } from "./photos-context";
+import { jpegFile, photoRows, servePhotoFile, setupPhotoUploads, storedKeys, upload, type PhotoContext } from "./photos-context";
 
 const ctx = setupPhotoUploads();
 type User = PhotoContext["member"];
@@ -90,11 +90,12 @@ describe("changing and deleting photos", () => {
       [ctx.manager, memberWeld],
     ] as const) {
       const row = rows.find((r) => r.id === id)!;
-      expect((await fetch(row.thumbUrl)).status).toBe(200);
+      expect((await servePhotoFile(user, id, "thumb")).status).toBe(200);
       expect((await remove(user, id)).status).toBe(204);
-      expect((await fetch(row.fileUrl)).status).toBe(404);
-      expect((await fetch(row.thumbUrl)).status).toBe(404);
+      expect((await servePhotoFile(user, id, "full")).status).toBe(404);
+      expect((await servePhotoFile(user, id, "thumb")).status).toBe(404);
       expect(await storedKeys(ctx)).not.toContain(row.fileKey);
+      expect(await storedKeys(ctx)).not.toContain(row.thumbKey);
       expect((await remove(user, id)).status).toBe(404);
     }
     expect((await photoRows(ctx.pressId)).map((r) => r.id)).toEqual([managerWeld]);

@@ -5,6 +5,7 @@ import { mkdtemp, rm } from "node:fs/promises";
 import { tmpdir } from "node:os";
 import path from "node:path";
 import { eq } from "drizzle-orm";
+import { NextRequest } from "next/server";
 import type { ClientUploadedFileData } from "uploadthing/types";
 import { afterAll, beforeAll, expect } from "vitest";
 import type { UploadRouter } from "@/app/api/uploadthing/core";
@@ -13,6 +14,7 @@ import { memberships, photos } from "@/db/schema";
 import { createSession } from "@/lib/auth/session";
 import { createPress } from "@/lib/data/press-edits";
 import type { PhotoUploadResult } from "@/lib/photos/store-upload";
+import { photoFileUrl } from "@/lib/photos/file-urls";
 import { localUploadthingEnv } from "@/lib/uploads/env";
 import type { PhotoUploadInput } from "@/lib/validation/photo";
 import { startFake, type FakeServer } from "./fake-uploadthing/harness";
@@ -103,4 +105,11 @@ export async function refusal(ctx: PhotoContext, promise: Promise<unknown>): Pro
   expect(error).toBeInstanceOf(ctx.UploadThingError);
   const { code, message } = error as InstanceType<PhotoContext["UploadThingError"]>;
   return { code, message };
+}
+
+/** GET of a photo file through the app's link route, as the page's <img> would ask for it. */
+export async function servePhotoFile(user: User | null, photoId: string, variant: "full" | "thumb", url = photoFileUrl(photoId, variant).url): Promise<Response> {
+  const { GET } = await import("@/app/photo-files/[photoId]/[variant]/route");
+  const req = new NextRequest(`http://127.0.0.1:3000${url}`, { headers: user ? { cookie: user.cookie } : {} });
+  return GET(req, { params: Promise.resolve({ photoId, variant }) });
 }

@@ -8,7 +8,7 @@ import { createPress } from "@/lib/data/press-edits";
 import { MAX_PHOTO_BYTES } from "@/lib/photos/limits";
 import { componentInputSchema } from "@/lib/validation/press";
 import { GPS_EXIF, flatPng, noisyJpeg } from "../fixtures/images";
-import { jpegFile, photoRows, refusal, setupPhotoUploads, storedKeys, upload } from "./photos-context";
+import { jpegFile, photoRows, refusal, servePhotoFile, setupPhotoUploads, storedKeys, upload } from "./photos-context";
 
 const ctx = setupPhotoUploads();
 const gauge = (pressId: string, label: string) =>
@@ -31,11 +31,13 @@ describe("the upload pipeline", () => {
     expect(await storedKeys(ctx)).not.toContain(result!.key);
     expect((await fetch(result!.ufsUrl)).status).toBe(404);
 
-    for (const [url, bytes] of [
-      [row!.fileUrl, row!.bytes],
-      [row!.thumbUrl, row!.thumbBytes],
+    for (const [variant, storageUrl, bytes] of [
+      ["full", row!.fileUrl, row!.bytes],
+      ["thumb", row!.thumbUrl, row!.thumbBytes],
     ] as const) {
-      const served = await fetch(url);
+      // Stored private: the storage URL alone is refused; the app's link route serves members.
+      expect((await fetch(storageUrl)).status).toBe(403);
+      const served = await servePhotoFile(ctx.member, photoId, variant);
       expect(served.status).toBe(200);
       expect(served.headers.get("content-type")).toBe("image/jpeg");
       expect(served.headers.get("x-content-type-options")).toBe("nosniff");

@@ -102,7 +102,8 @@ describe("components and their history", () => {
       params("pressId", pressId),
     );
     expect(bad.status).toBe(400);
-    expect(((await bad.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors).toHaveProperty("spec");
+    // Field errors name the full path of the field, as the forms do.
+    expect(((await bad.json()) as { fieldErrors: Record<string, string[]> }).fieldErrors).toHaveProperty(["spec.rodMm"]);
     const negative = componentInputSchema.safeParse({ kind: "hose", label: "H", spec: { line: "pressure", insideDiameterMm: -1, standard: "x", ratedPressureBar: 200, lengthMm: 100 } });
     expect(negative.success).toBe(false);
     expect(negative.error!.issues[0]!.path).toEqual(["spec", "insideDiameterMm"]);
@@ -142,8 +143,10 @@ describe("components and their history", () => {
 describe("hour meter", () => {
   it("never goes backwards, and any member may record it", async () => {
     const { id: pressId } = await createPress({ userId: manager.userId }, manager.shopId, { name: "Hours press", frameType: "h-frame", lifecycle: "in-service" });
-    await recordHourMeter({ userId: manager.userId }, pressId, { hours: 10 });
-    await recordHourMeter({ userId: member.userId }, pressId, { hours: 12.5 });
+    // Readings a day apart, so the elapsed-time rule (tested in hour-meter-hardening) allows them.
+    const daysAgo = (d: number) => new Date(Date.now() - d * 86_400_000);
+    await recordHourMeter({ userId: manager.userId }, pressId, { hours: 10 }, daysAgo(3));
+    await recordHourMeter({ userId: member.userId }, pressId, { hours: 12.5 }, daysAgo(2));
     await expect(recordHourMeter({ userId: manager.userId }, pressId, { hours: 12 })).rejects.toThrow(/cannot go backwards/);
     await expect(recordHourMeter({ userId: outsider.userId }, pressId, { hours: 20 })).rejects.toBeInstanceOf(NotFoundError);
 

@@ -140,7 +140,7 @@ describe("POST /api/sizing — bad requests get 400 with a message per field", (
       expect(res.status, text).toBe(400);
       const json = (await res.json()) as Body;
       expect(json.error).toBe("Request body is not valid JSON.");
-      expect(json.fieldErrors?.body).toEqual(["Send the sizing input as a JSON object."]);
+      expect(json.fieldErrors?.body).toEqual(["Send a JSON object."]);
     }
   });
 

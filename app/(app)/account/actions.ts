@@ -5,8 +5,10 @@ import { z } from "zod";
 import type { ActionState } from "@/lib/action-state";
 import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
 import { requestIp, requireSignedIn } from "@/lib/auth/current";
+import { formatWait } from "@/lib/auth/throttle-policy";
 import { changePassword, updateUnitSystem } from "@/lib/data/users";
 import { changePasswordSchema } from "@/lib/validation/auth";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
@@ -16,8 +18,11 @@ export async function changePasswordAction(_prev: ActionState, form: FormData): 
     newPassword: form.get("newPassword"),
     confirmPassword: form.get("confirmPassword"),
   });
-  if (!parsed.success) return { ok: false, fieldErrors: z.flattenError(parsed.error).fieldErrors };
+  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsOf(parsed.error.issues) };
   const result = await changePassword({ userId: user.id }, { ...parsed.data, ip: await requestIp() });
+  if (!result.ok && result.reason === "throttled") {
+    return { ok: false, message: `Too many wrong passwords. Try again in ${formatWait(result.retryAfterS)}.` };
+  }
   if (!result.ok) return { ok: false, fieldErrors: { currentPassword: ["That is not your current password."] } };
   await setSessionCookie(result.token);
   return { ok: true, message: "Password changed. You were signed out everywhere else." };

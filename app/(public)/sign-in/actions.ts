@@ -1,19 +1,21 @@
 "use server";
 
 import { redirect } from "next/navigation";
-import { z } from "zod";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
 import { requestIp } from "@/lib/auth/current";
+import { safeNextPath } from "@/lib/auth/safe-next";
 import { attemptSignIn } from "@/lib/auth/sign-in";
+import { formatWait } from "@/lib/auth/throttle-policy";
 import { signInSchema } from "@/lib/validation/auth";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 export async function signInAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
   const values = echoValues(form, ["password"]);
   const parsed = signInSchema.safeParse({ email: form.get("email"), password: form.get("password") });
   if (!parsed.success) {
-    return { ok: false, fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+    return { ok: false, fieldErrors: fieldErrorsOf(parsed.error.issues), values };
   }
   const result = await attemptSignIn({ ...parsed.data, ip: await requestIp() });
   if (!result.ok) {
@@ -24,10 +26,5 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
     return { ok: false, message, values };
   }
   await setSessionCookie(result.token);
-  const next = form.get("next");
-  redirect(typeof next === "string" && next.startsWith("/") && !next.startsWith("//") ? next : "/dashboard");
-}
-
-function formatWait(seconds: number): string {
-  return seconds < 90 ? `${seconds} seconds` : `${Math.ceil(seconds / 60)} minutes`;
+  redirect(safeNextPath(form.get("next")));
 }

@@ -1,13 +1,18 @@
 "use server";
 
 import { redirect } from "next/navigation";
-import { z } from "zod";
 import { echoValues, type ActionState } from "@/lib/action-state";
-import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
-import { createSession } from "@/lib/auth/session";
-import { createUserWithPersonalShop, EmailTakenError } from "@/lib/data/users";
+import { assertSameOriginAction } from "@/lib/auth/action-guard";
+import { requestIp } from "@/lib/auth/current";
+import { formatWait } from "@/lib/auth/throttle-policy";
+import { requestAccount } from "@/lib/data/sign-up";
 import { signUpSchema } from "@/lib/validation/auth";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
+/**
+ * Answers the same whether or not the address already has an account (see requestAccount): the
+ * person continues on the sign-in page, where a new account's password works.
+ */
 export async function signUpAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
   const values = echoValues(form, ["password"]);
@@ -17,17 +22,11 @@ export async function signUpAction(_prev: ActionState, form: FormData): Promise<
     password: form.get("password"),
   });
   if (!parsed.success) {
-    return { ok: false, message: "Please fix the marked fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+    return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsOf(parsed.error.issues), values };
   }
-  try {
-    const { userId } = await createUserWithPersonalShop(parsed.data);
-    const { token } = await createSession(userId);
-    await setSessionCookie(token);
-  } catch (error) {
-    if (error instanceof EmailTakenError) {
-      return { ok: false, fieldErrors: { email: [error.message + " Sign in instead?"] }, values };
-    }
-    throw error;
+  const result = await requestAccount(parsed.data, await requestIp());
+  if (!result.ok) {
+    return { ok: false, message: `Too many sign-up attempts. Try again in ${formatWait(result.retryAfterS)}.`, values };
   }
-  redirect("/dashboard");
+  redirect("/sign-in?signed-up=1");
 }

@@ -2,13 +2,13 @@
 
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
-import { z } from "zod";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
 import { ForbiddenError } from "@/lib/auth/permissions";
 import { createPlannedPressFromSizing } from "@/lib/data/presses";
 import { plannedPressSchema } from "@/lib/validation/planned-press";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 /** Saves the calculator's current input as a planned press in the user's working shop. */
 export async function savePlannedPressAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -22,7 +22,7 @@ export async function savePlannedPressAction(_prev: ActionState, form: FormData)
     sizingInput: form.get("sizingInput"),
   });
   if (!parsed.success) {
-    return { ok: false, message: "Please fix the marked fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+    return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsOf(parsed.error.issues), values };
   }
   let id: string;
   try {

@@ -3,11 +3,12 @@ import { z } from "zod";
 import { createPress } from "@/lib/data/press-edits";
 import { listPresses } from "@/lib/data/presses";
 import { getActiveShop } from "@/lib/data/shops";
-import { apiRoute, jsonError, requireApiSession } from "@/lib/http";
+import { apiRoute, readJsonBody, jsonError, requireApiSession } from "@/lib/http";
 import { ID_PATTERN } from "@/lib/ids";
 import { pressInputSchema } from "@/lib/validation/press";
 
 const shopIdParam = z.string().regex(ID_PATTERN, "Unknown shop id.");
+const createPressBody = pressInputSchema.extend({ shopId: shopIdParam.optional() });
 
 /** Presses of `?shopId=` (default: the user's working shop); a shop the user is not in lists nothing. */
 export const GET = apiRoute(async (req: NextRequest) => {
@@ -23,9 +24,8 @@ export const GET = apiRoute(async (req: NextRequest) => {
 export const POST = apiRoute(async (req: NextRequest) => {
   const current = await requireApiSession(req);
   const actor = { userId: current.user.id };
-  const body = z.looseObject({ shopId: shopIdParam.optional() }).parse(await req.json().catch(() => null));
-  const { shopId: requested, ...rest } = body;
-  const input = pressInputSchema.parse(rest);
+  // One strict schema for the whole body, so every unknown key (even "__proto__") is named.
+  const { shopId: requested, ...input } = createPressBody.parse(await readJsonBody(req));
   const shopId = requested ?? (await getActiveShop(actor, current.user.activeShopId))?.id;
   if (!shopId) return jsonError(404, "Shop not found");
   const { id } = await createPress(actor, shopId, input);

@@ -1,12 +1,9 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { clientIp } from "@/lib/auth/client-ip";
 import { evaluateSizing, SizingInputError } from "@/lib/hydraulics";
-import { jsonError, apiRoute } from "@/lib/http";
+import { apiRoute, errorResponse, jsonError, readJsonBody } from "@/lib/http";
 import { hitRateLimit, SIZING_API_LIMIT, type RateLimitResult } from "@/lib/rate-limit";
-import { BODY_KEY, problemFieldErrors, sizingFieldErrors, sizingInputSchema } from "@/lib/validation/sizing";
-
-/** A full sizing input with every optional block is about 1 kB; anything far larger is not one. */
-const MAX_BODY_BYTES = 64 * 1024;
+import { problemFieldErrors, sizingFieldErrors, sizingInputSchema } from "@/lib/validation/sizing";
 
 function limitHeaders(limit: RateLimitResult): Record<string, string> {
   return {
@@ -34,15 +31,14 @@ export const POST = apiRoute(
       );
     }
 
-    const text = await req.text();
-    if (text.length > MAX_BODY_BYTES) {
-      return jsonError(413, "Request body too large.", { fieldErrors: { [BODY_KEY]: ["Send at most 64 kB of JSON."] } }, { headers });
-    }
     let body: unknown;
     try {
-      body = JSON.parse(text);
-    } catch {
-      return jsonError(400, "Request body is not valid JSON.", { fieldErrors: { [BODY_KEY]: ["Send the sizing input as a JSON object."] } }, { headers });
+      body = await readJsonBody(req);
+    } catch (error) {
+      // Too large or not JSON: the shared answer, with this route's rate-limit headers.
+      const refusal = errorResponse(error);
+      for (const [name, value] of Object.entries(headers)) refusal.headers.set(name, value);
+      return refusal;
     }
 
     const parsed = sizingInputSchema.safeParse(body);

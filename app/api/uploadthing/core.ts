@@ -14,7 +14,8 @@ import { photoUploadInputSchema } from "@/lib/validation/photo";
 const f = createUploadthing();
 
 // The SDK counts files per type, so the total per upload is checked again in the middleware.
-const eachType = { maxFileSize: MAX_PHOTO_FILE_SIZE, maxFileCount: MAX_PHOTOS_PER_UPLOAD } as const;
+// Originals are private too: only the server reads them (through a signed URL), then deletes them.
+const eachType = { maxFileSize: MAX_PHOTO_FILE_SIZE, maxFileCount: MAX_PHOTOS_PER_UPLOAD, acl: "private" } as const;
 
 type PhotoInput = z.output<typeof photoUploadInputSchema>;
 

@@ -1,7 +1,7 @@
-import type { NextRequest } from "next/server";
+import { NextRequest } from "next/server";
 import { createRouteHandler } from "uploadthing/next";
 import { isSameOriginRequest } from "@/lib/auth/csrf";
-import { jsonError } from "@/lib/http";
+import { errorResponse, jsonError, readBodyText } from "@/lib/http";
 import { uploadRouter } from "./core";
 
 const handlers = createRouteHandler({ router: uploadRouter });
@@ -19,5 +19,13 @@ export async function POST(req: NextRequest): Promise<Response> {
   if (!req.headers.has("uploadthing-hook") && !isSameOriginRequest(req.headers)) {
     return jsonError(403, "Cross-site request refused.");
   }
-  return handlers.POST(req);
+  // The SDK reads the body whole: hand it a copy read under the shared limit (its JSON is small;
+  // callbacks are verified against these exact bytes).
+  let body: string;
+  try {
+    body = await readBodyText(req);
+  } catch (error) {
+    return errorResponse(error);
+  }
+  return handlers.POST(new NextRequest(req.url, { method: "POST", headers: req.headers, body }));
 }

@@ -9,6 +9,7 @@ const EXPECTED: Record<Action, Role[]> = {
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
   recordHours: ["manager", "inspector", "member"],
+  correctHours: ["manager"],
   logService: ["manager"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],

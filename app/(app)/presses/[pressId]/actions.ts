@@ -7,10 +7,10 @@ import type { ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
 import { createComponent, deleteComponent, removeComponent, replaceComponent, updateComponent } from "@/lib/data/components";
-import { recordHourMeter } from "@/lib/data/press-edits";
+import { correctHourMeter, recordHourMeter } from "@/lib/data/press-edits";
 import { componentFromForm } from "@/lib/press/component-form";
 import { fieldErrorsFrom, formValues, plainNumber } from "@/lib/press/form-values";
-import { componentInputSchema, hourReadingSchema, replaceComponentSchema } from "@/lib/validation/press";
+import { componentInputSchema, hourCorrectionSchema, hourReadingSchema, replaceComponentSchema } from "@/lib/validation/press";
 
 export async function addComponentAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
@@ -94,4 +94,19 @@ export async function recordHoursAction(pressId: string, _prev: ActionState, for
   }
   revalidatePath(`/presses/${pressId}`);
   return { ok: true, message: `Recorded ${parsed.data.hours} h.` };
+}
+
+export async function correctHoursAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user } = await requireShopContext();
+  const values = formValues(form);
+  const parsed = hourCorrectionSchema.safeParse({ hours: plainNumber(values.hours), reason: values.reason ?? "" });
+  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsFrom(parsed.error.issues), values };
+  try {
+    await correctHourMeter({ userId: user.id }, pressId, parsed.data);
+  } catch (error) {
+    return refusalState(error, values, "Only a manager of this shop can correct the hour meter.");
+  }
+  revalidatePath(`/presses/${pressId}`);
+  return { ok: true, message: `Corrected the hour meter to ${parsed.data.hours} h.` };
 }

@@ -4,21 +4,21 @@ import { AsBuiltPanel } from "@/components/press/as-built-panel";
 import { ComponentTable } from "@/components/press/component-table";
 import { FreshSWR } from "@/components/ui/fresh-swr";
 import { PressPhotos } from "@/components/photos/press-photos";
-import { HourMeterForm } from "@/components/press/hour-meter-form";
+import { HourCorrectionForm, HourMeterForm } from "@/components/press/hour-meter-form";
 import { PressTimeline } from "@/components/press/press-timeline";
 import { SafetyCautions } from "@/components/sizing/safety-cautions";
 import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { showQuantity as show } from "@/components/ui/quantity";
 import { orPageError, requireShopContext } from "@/lib/auth/current";
-import { canEditPress } from "@/lib/auth/permissions";
+import { can, canEditPress } from "@/lib/auth/permissions";
 import { listComponents } from "@/lib/data/components";
 import { listHourReadings } from "@/lib/data/press-edits";
 import { getPress } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import { evaluateAsBuilt } from "@/lib/press/as-built";
 import { pressTimeline } from "@/lib/press/timeline";
-import { recordHoursAction } from "./actions";
+import { correctHoursAction, recordHoursAction } from "./actions";
 
 export const metadata: Metadata = { title: "Press" };
 
@@ -119,8 +119,11 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           </Card>
         </div>
         <Card title="Hour meter">
-          <p className="mb-3 text-sm text-steel-600">Last reading {press.hourMeter} h. Readings can never go backwards.</p>
+          <p className="mb-3 text-sm text-steel-600">
+            Last reading {press.hourMeter} h. Readings never go backwards, nor forward by more than the time that has passed.
+          </p>
           {press.lifecycle !== "retired" ? <HourMeterForm action={recordHoursAction.bind(null, pressId)} current={press.hourMeter} /> : null}
+          {press.lifecycle !== "retired" && can(press.role, "correctHours") ? <HourCorrectionForm action={correctHoursAction.bind(null, pressId)} /> : null}
         </Card>
         <div id="history">
           <Card title="History">

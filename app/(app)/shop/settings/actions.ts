@@ -1,20 +1,20 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
-import { z } from "zod";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { changeMemberRole, LastManagerError, updateShop } from "@/lib/data/shops";
 import { memberRoleSchema, shopSettingsSchema } from "@/lib/validation/shop";
+import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 export async function updateShopAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
   const { user, shop } = await requireShopContext();
   const values = echoValues(form);
   const parsed = shopSettingsSchema.safeParse({ name: form.get("name"), timeZone: form.get("timeZone") });
-  if (!parsed.success) return { ok: false, fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+  if (!parsed.success) return { ok: false, fieldErrors: fieldErrorsOf(parsed.error.issues), values };
   try {
     await updateShop({ userId: user.id }, shop.id, parsed.data);
   } catch (error) {

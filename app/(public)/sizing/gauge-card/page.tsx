@@ -1,10 +1,10 @@
 import type { Metadata } from "next";
 import Link from "next/link";
-import { z } from "zod";
 import { GaugeCard } from "@/components/sizing/gauge-card";
 import { PrintButton } from "@/components/sizing/print-button";
 import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
+import { fieldErrorsOf, allMessages } from "@/lib/validation/field-errors";
 import { gaugeCardQuerySchema } from "@/lib/validation/gauge-card";
 
 export const metadata: Metadata = { title: "Gauge card" };
@@ -14,8 +14,7 @@ type SearchParams = Promise<Record<string, string | string[] | undefined>>;
 export default async function GaugeCardPage({ searchParams }: { searchParams: SearchParams }) {
   const parsed = gaugeCardQuerySchema.safeParse(await searchParams);
   if (!parsed.success) {
-    const errors = z.flattenError(parsed.error);
-    const messages = [...errors.formErrors, ...Object.values(errors.fieldErrors).flat()];
+    const messages = allMessages(fieldErrorsOf(parsed.error.issues));
     return (
       <div className="mx-auto max-w-3xl px-4 py-8">
         <PageTitle title="Gauge card" />

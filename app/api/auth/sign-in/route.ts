@@ -2,12 +2,12 @@ import { NextResponse, type NextRequest } from "next/server";
 import { clientIp } from "@/lib/auth/client-ip";
 import { sessionCookie } from "@/lib/auth/cookie";
 import { attemptSignIn } from "@/lib/auth/sign-in";
-import { apiRoute, jsonError } from "@/lib/http";
+import { apiRoute, readJsonBody, jsonError } from "@/lib/http";
 import { signInSchema } from "@/lib/validation/auth";
 
 /** JSON sign-in for API clients; same throttling and answers as the sign-in form. */
 export const POST = apiRoute(async (req: NextRequest) => {
-  const body: unknown = await req.json().catch(() => null);
+  const body: unknown = await readJsonBody(req);
   const input = signInSchema.parse(body);
   const result = await attemptSignIn({ ...input, ip: clientIp(req.headers) });
   if (!result.ok && result.reason === "throttled") {

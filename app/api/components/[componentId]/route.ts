@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { deleteComponent, getComponent, updateComponent } from "@/lib/data/components";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, readJsonBody, requireApiSession } from "@/lib/http";
 import { componentPatchSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ componentId: string }> };
@@ -9,7 +9,7 @@ type Context = { params: Promise<{ componentId: string }> };
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { componentId } = await params;
-  const patch = componentPatchSchema.parse(await req.json().catch(() => null));
+  const patch = componentPatchSchema.parse(await readJsonBody(req));
   await updateComponent({ userId: current.user.id }, componentId, patch);
   return NextResponse.json({ component: await getComponent({ userId: current.user.id }, componentId) });
 });

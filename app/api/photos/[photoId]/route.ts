@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { deletePhoto, getPhoto, updatePhoto } from "@/lib/data/photos";
-import { apiRoute, jsonError, requireApiSession } from "@/lib/http";
+import { apiRoute, readJsonBody, jsonError, requireApiSession } from "@/lib/http";
 import { StorageUnavailableError } from "@/lib/uploads/storage";
 import { photoPatchSchema } from "@/lib/validation/photo";
 
@@ -17,7 +17,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { photoId } = await params;
-  const patch = photoPatchSchema.parse(await req.json().catch(() => null));
+  const patch = photoPatchSchema.parse(await readJsonBody(req));
   return NextResponse.json({ photo: await updatePhoto({ userId: current.user.id }, photoId, patch) });
 });
 

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { replaceComponent } from "@/lib/data/components";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, readJsonBody, requireApiSession } from "@/lib/http";
 import { componentInputSchema, replaceComponentSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ componentId: string }> };
@@ -9,7 +9,7 @@ type Context = { params: Promise<{ componentId: string }> };
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { componentId } = await params;
-  const body = replaceComponentSchema.parse(await req.json().catch(() => null));
+  const body = replaceComponentSchema.parse(await readJsonBody(req));
   const replacement = componentInputSchema.parse(body.replacement);
   const { id } = await replaceComponent({ userId: current.user.id }, componentId, { ...body, replacement });
   return NextResponse.json({ id }, { status: 201 });

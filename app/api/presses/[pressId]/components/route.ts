@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { createComponent, listComponents } from "@/lib/data/components";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, readJsonBody, requireApiSession } from "@/lib/http";
 import { componentInputSchema } from "@/lib/validation/press";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -17,7 +17,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const input = componentInputSchema.parse(await req.json().catch(() => null));
+  const input = componentInputSchema.parse(await readJsonBody(req));
   const { id } = await createComponent({ userId: current.user.id }, pressId, input);
   return NextResponse.json({ id }, { status: 201 });
 });
