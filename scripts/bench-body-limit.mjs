@@ -3,6 +3,8 @@
 // POST /api/auth/sign-in. Starts its own server (scripts/server.mjs) from an existing production
 // build (NEXT_DIST_DIR, default .next) on BENCH_PORT (default 3190) against DATABASE_URL, samples
 // the server's resident memory from /proc every 25 ms, and prints the figures. Asserts nothing.
+// "closed" in the answers: the server hung up while this client was still writing, so Node's client
+// reports the write error instead of the 413 (curl, which reads while it writes, shows the 413).
 //   npm run bench:body-limit          (after `npx next build`; the database must be running)
 import { spawn } from "node:child_process";
 import { readFileSync } from "node:fs";

@@ -15,7 +15,7 @@ export function HourMeterForm({ action, current }: Props) {
       <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
       <div className="flex flex-wrap items-end gap-3">
         <Field name="hours" label="Reading now (h)" inputMode="decimal" required placeholder={String(current)} defaultValue={state.ok ? "" : state.values?.hours} errors={state.fieldErrors?.hours} className="w-40" />
-        <Field name="note" label="Note — optional" maxLength={255} defaultValue={state.ok ? "" : state.values?.note} errors={state.fieldErrors?.note} className="min-w-0 flex-1" />
+        <Field name="note" label="Note — optional" maxLength={255} defaultValue={state.ok ? "" : state.values?.note} errors={state.fieldErrors?.note} className="min-w-48 flex-1" />
         <Button type="submit" variant="secondary" disabled={pending}>
           Record
         </Button>
@@ -35,7 +35,7 @@ export function HourCorrectionForm({ action }: { action: Props["action"] }) {
         <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
         <div className="flex flex-wrap items-end gap-3">
           <Field name="hours" label="Correct reading (h)" inputMode="decimal" required defaultValue={state.ok ? "" : state.values?.hours} errors={state.fieldErrors?.hours} className="w-40" />
-          <Field name="reason" label="Why" required maxLength={255} defaultValue={state.ok ? "" : state.values?.reason} errors={state.fieldErrors?.reason} className="min-w-0 flex-1" />
+          <Field name="reason" label="Why" required maxLength={255} defaultValue={state.ok ? "" : state.values?.reason} errors={state.fieldErrors?.reason} className="min-w-48 flex-1" />
           <Button type="submit" variant="secondary" disabled={pending}>
             Correct
           </Button>

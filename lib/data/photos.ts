@@ -1,8 +1,8 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, photos, users } from "@/db/schema";
-import { canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { components, memberships, photos, presses, users } from "@/db/schema";
+import { assertCan, canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { photoFileUrl, type PhotoVariant } from "@/lib/photos/file-urls";
 import type { PhotoKind } from "@/lib/photos/kinds";
 import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
@@ -140,13 +140,16 @@ export async function getPhoto(actor: Actor, photoId: string): Promise<PhotoView
  * members of its press's shop; another shop's photo (or an unknown id) is NotFoundError.
  */
 export async function photoFileKey(actor: Actor, photoId: string, variant: PhotoVariant): Promise<string> {
+  // One query per file served (a gallery asks for many): the photo, scoped to the actor's shops.
   const [row] = await db
-    .select({ pressId: photos.pressId, fileKey: photos.fileKey, thumbKey: photos.thumbKey })
+    .select({ fileKey: photos.fileKey, thumbKey: photos.thumbKey, role: memberships.role })
     .from(photos)
+    .innerJoin(presses, eq(presses.id, photos.pressId))
+    .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, actor.userId)))
     .where(eq(photos.id, photoId))
     .limit(1);
   if (!row) throw new NotFoundError("Photo not found");
-  await pressAccess(db, actor, row.pressId, "viewPress");
+  assertCan(row.role, "viewPress");
   return variant === "thumb" ? row.thumbKey : row.fileKey;
 }
 

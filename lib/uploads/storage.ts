@@ -47,17 +47,35 @@ export async function storeJpegs(files: { name: string; data: Buffer }[], onStor
 }
 
 /** Lifetime of a storage URL the server signs for itself (never handed to a browser). */
-const SERVER_FETCH_URL_TTL_S = 60;
+const SERVER_URL_TTL_S = 10 * 60;
+/** A cached URL is reused while it has at least this long left. */
+const SERVER_URL_MIN_LEFT_MS = 60_000;
+const SERVER_URL_CACHE_SIZE = 2000;
+const signedUrls = new Map<string, { url: string; until: number }>();
 
 /**
- * Fetches a stored file through a short-lived signed URL (files are private). Signing needs no
- * request to the service. Throws StorageUnavailableError when the service does not answer 2xx.
+ * The SDK's signing costs about a millisecond of CPU (more under load) although it makes no
+ * request, and a gallery asks for many files: URLs are cached per key, in this process only.
+ */
+async function serverSignedUrl(key: string, now = Date.now()): Promise<string> {
+  const cached = signedUrls.get(key);
+  if (cached && cached.until - now >= SERVER_URL_MIN_LEFT_MS) return cached.url;
+  const { ufsUrl } = await utapi().generateSignedURL(key, { expiresIn: SERVER_URL_TTL_S });
+  signedUrls.delete(key);
+  signedUrls.set(key, { url: ufsUrl, until: now + SERVER_URL_TTL_S * 1000 });
+  // Oldest first (Map keeps insertion order): a bounded cache whatever the number of photos.
+  if (signedUrls.size > SERVER_URL_CACHE_SIZE) signedUrls.delete(signedUrls.keys().next().value!);
+  return ufsUrl;
+}
+
+/**
+ * Fetches a stored file through a signed URL (files are private). Throws StorageUnavailableError
+ * when the service does not answer 2xx.
  */
 export async function fetchStoredFile(key: string): Promise<Response> {
   let res: Response;
   try {
-    const { ufsUrl } = await utapi().generateSignedURL(key, { expiresIn: SERVER_FETCH_URL_TTL_S });
-    res = await fetch(ufsUrl);
+    res = await fetch(await serverSignedUrl(key));
   } catch (cause) {
     throw new StorageUnavailableError("read the photo", { cause });
   }

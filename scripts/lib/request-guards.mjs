@@ -13,9 +13,15 @@ function refuseTooLarge(req, res) {
     res.writeHead(413, { "content-type": "application/json", connection: "close" });
     res.end(JSON.stringify({ error: "Request body too large." }));
   }
-  // Stop reading: whatever else the client sends goes with the connection.
-  if (res.writableFinished) req.destroy();
-  else res.on("finish", () => req.destroy());
+  // Stop reading: whatever else the client sends goes with the connection. The socket is half-
+  // closed first and destroyed a moment later, so a client still writing can read the 413 (an
+  // unread body is never buffered: the paused request lets TCP flow control stop the sender).
+  const close = () => {
+    req.socket.end();
+    setTimeout(() => req.destroy(), 1000).unref();
+  };
+  if (res.writableFinished) close();
+  else res.on("finish", close);
 }
 
 /** Returns false when the request was refused (413 already sent); otherwise watches its body. */
