@@ -19,7 +19,7 @@ export const ACTIONS = {
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
   recordHours: ["manager", "inspector", "member"],
-  logService: ["manager"],
+  logService: ["manager", "inspector"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
   signInspection: ["manager", "inspector"],

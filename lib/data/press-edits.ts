@@ -7,7 +7,7 @@ import { ConflictError } from "@/lib/errors";
 import { newId } from "@/lib/ids";
 import type { PressInput, PressPatch } from "@/lib/validation/press";
 import type { Actor } from "./actor";
-import { assertNotRetired, pressAccess } from "./press-access";
+import { assertNotRetired, pressAccess, type Executor } from "./press-access";
 import { roleIn } from "./shops";
 
 /** Creates a press in a shop. Authorization: managers of that shop (others: not-found / forbidden). */
@@ -38,9 +38,16 @@ export type HourReading = { id: number; hours: number; readAt: Date; note: strin
 /**
  * Records an hour-meter reading. It may never be lower than the last one: the press row is locked
  * so two readings at once cannot both pass the check. Authorization: any member of the shop.
+ * Pass `executor` to record it inside a caller's transaction (e.g. with a service-log entry).
  */
-export async function recordHourMeter(actor: Actor, pressId: string, input: { hours: number; note?: string | null }, now = new Date()): Promise<void> {
-  await db.transaction(async (tx) => {
+export async function recordHourMeter(
+  actor: Actor,
+  pressId: string,
+  input: { hours: number; note?: string | null },
+  now = new Date(),
+  executor: Executor = db,
+): Promise<void> {
+  await executor.transaction(async (tx) => {
     const access = await pressAccess(tx, actor, pressId, "recordHours", { forUpdate: true });
     assertNotRetired(access);
     if (input.hours < access.hourMeter) {

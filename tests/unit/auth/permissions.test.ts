@@ -9,7 +9,7 @@ const EXPECTED: Record<Action, Role[]> = {
   viewPress: ["manager", "inspector", "member"],
   editPress: ["manager"],
   recordHours: ["manager", "inspector", "member"],
-  logService: ["manager"],
+  logService: ["manager", "inspector"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
   signInspection: ["manager", "inspector"],
