@@ -48,7 +48,7 @@ export function ServiceLogTable({ pressId, initial, units, currency, pageSize }:
 
   const columns = useMemo(
     () => [
-      col.accessor("performedOn", { header: "Date", cell: (c) => <Link className="font-mono underline" href={`/presses/${pressId}/service/${c.row.original.id}`}>{c.getValue()}</Link> }),
+      col.accessor("performedOn", { header: "Date", cell: (c) => <Link className="whitespace-nowrap font-mono underline" href={`/presses/${pressId}/service/${c.row.original.id}`}>{c.getValue()}</Link> }),
       col.accessor("kind", { header: "Work", cell: (c) => SERVICE_KIND_LABELS[c.getValue()], sortingFn: (a, b) => SERVICE_KIND_LABELS[a.original.kind].localeCompare(SERVICE_KIND_LABELS[b.original.kind]) }),
       col.accessor("hours", { header: "Hours", cell: (c) => (c.getValue() === null ? "—" : `${c.getValue()} h`), sortUndefined: "last" }),
       col.display({ id: "detail", header: "Details", cell: (c) => <span className="text-steel-700">{detail(c.row.original, units) || "—"}{c.row.original.notes ? <span className="block text-xs text-steel-500">{c.row.original.notes}</span> : null}</span> }),
