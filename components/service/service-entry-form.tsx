@@ -28,11 +28,15 @@ export function ServiceEntryForm({ action, units, currency, today, currentHours,
   const [kind, setKind] = useState(correction?.kind ?? v.kind ?? "filter-changed");
   const errors = state.fieldErrors ?? {};
   const pressure = displayUnit("pressure", units).symbol;
+  // Errors on fields this kind does not show (e.g. after the kind was changed) still reach the reader.
+  const shown = new Set(["kind", "performedOn", "hours", "componentId", "replacementLabel", "iso4406", "reliefFound", "reliefSet", "parts", "cost", "notes"]);
+  const other = Object.entries(errors).filter(([key]) => !shown.has(key) || (key === "componentId" && kind !== "hose-replaced"));
   return (
     <form action={formAction} className="flex flex-col gap-4" noValidate>
       <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
+      {other.length > 0 ? <p className="text-sm text-fail">{other.flatMap(([, messages]) => messages ?? []).join(" ")}</p> : null}
       <div className="grid gap-3 sm:grid-cols-3">
-        {correction ? null : <SelectField name="kind" label="Work done" options={SERVICE_KIND_OPTIONS} value={kind} onChange={(e) => setKind(e.target.value)} errors={errors.kind} />}
+        {correction ? null : <SelectField name="kind" label="Work done" options={SERVICE_KIND_OPTIONS} defaultValue={v.kind} onChange={(e) => setKind(e.target.value)} errors={errors.kind} />}
         <Field name="performedOn" label="Date" type="date" max={today} required defaultValue={v.performedOn} errors={errors.performedOn} />
         {correction ? null : (
           <Field name="hours" label="Hour meter (h) — optional" inputMode="decimal" placeholder={`last ${currentHours}`} defaultValue={v.hours} errors={errors.hours} hint="Recorded in the hour-meter log too; never below the last reading." />

@@ -9,8 +9,10 @@ import { components, hourMeterReadings, memberships, serviceEntries, serviceEntr
 import { createSession } from "@/lib/auth/session";
 import { createComponent } from "@/lib/data/components";
 import { createPress } from "@/lib/data/press-edits";
+import { authorizePhotoTarget, createPhotoRecord, listServiceEntryPhotos } from "@/lib/data/photos";
 import { listServiceDueByPress } from "@/lib/data/service-due";
 import { createServiceEntry, listServiceEntries } from "@/lib/data/service-log";
+import { newId } from "@/lib/ids";
 import { localDate, addLocalDays } from "@/lib/schedule";
 import { componentInputSchema } from "@/lib/validation/press";
 import { serviceEntryInputSchema } from "@/lib/validation/service";
@@ -120,5 +122,18 @@ describe("service plan and log", () => {
     const csv = await logGet(getRequest(`/api/presses/${pressId}/service-log?format=csv`, await cookie(member)), params("pressId", pressId));
     expect(csv.headers.get("content-type")).toContain("text/csv");
     expect(await csv.text()).toContain("Filter element changed");
+  });
+
+  it("attaches photos to an entry of the same press only", async () => {
+    const { entries } = await listServiceEntries({ userId: member.userId }, pressId, { limit: 1 });
+    const entryId = entries[0]!.id;
+    const other = await createPress({ userId: manager.userId }, manager.shopId, { name: "Photo elsewhere", frameType: "h-frame" });
+    await expect(authorizePhotoTarget({ userId: member.userId }, { pressId: other.id, serviceEntryId: entryId })).rejects.toThrow("Service entry not found");
+    await expect(authorizePhotoTarget({ userId: outsider.userId }, { pressId, serviceEntryId: entryId })).rejects.toThrow("Press not found");
+    const target = await authorizePhotoTarget({ userId: member.userId }, { pressId, serviceEntryId: entryId });
+    const image = { key: "k", url: "http://127.0.0.1/f/k", width: 800, height: 600, bytes: 1000 };
+    await createPhotoRecord({ userId: member.userId }, target, { id: newId(), kind: "leak", caption: "Weep at the fitting", full: image, thumb: { ...image, key: "t" } });
+    const shots = await listServiceEntryPhotos({ userId: member.userId }, pressId, entryId);
+    expect(shots.map((p) => p.caption)).toEqual(["Weep at the fitting"]);
   });
 });

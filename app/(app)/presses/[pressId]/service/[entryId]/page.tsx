@@ -1,11 +1,13 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
+import { EntryPhotos } from "@/components/service/entry-photos";
 import { ServiceEntryForm } from "@/components/service/service-entry-form";
 import { Card, PageTitle } from "@/components/ui/card";
 import { showQuantity } from "@/components/ui/quantity";
 import { orPageError, requireShopContext } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
+import { listServiceEntryPhotos } from "@/lib/data/photos";
 import { getPress } from "@/lib/data/presses";
 import { getServiceEntry, listServiceRevisions } from "@/lib/data/service-log";
 import { getServicePlan } from "@/lib/data/service-plan";
@@ -31,7 +33,7 @@ export default async function ServiceEntryPage({ params }: { params: Promise<{ p
   const entry = await orPageError(getServiceEntry(actor, entryId));
   if (entry.pressId !== pressId) notFound();
   const units = user.unitSystem;
-  const [press, revisions, plan] = await Promise.all([getPress(actor, pressId), listServiceRevisions(actor, entryId), getServicePlan(actor, pressId)]);
+  const [press, revisions, plan, photos] = await Promise.all([getPress(actor, pressId), listServiceRevisions(actor, entryId), getServicePlan(actor, pressId), listServiceEntryPhotos(actor, pressId, entryId)]);
   const canCorrect = can(press.role, "logService") && press.lifecycle !== "retired";
   const rows: [string, string][] = [
     ["Date", formatLocalDate(entry.performedOn)],
@@ -92,6 +94,16 @@ export default async function ServiceEntryPage({ params }: { params: Promise<{ p
             </ul>
           )}
         </Card>
+        <div className="lg:col-span-2">
+          <Card title={`Photos (${photos.length})`}>
+            <EntryPhotos
+              pressId={pressId}
+              entryId={entryId}
+              photos={photos.map((p) => ({ id: p.id, url: p.url, thumbUrl: p.thumbUrl, thumbWidth: p.thumbWidth, thumbHeight: p.thumbHeight, caption: p.caption, kind: p.kind }))}
+              canAttach={can(press.role, "attachPhoto") && press.lifecycle !== "retired"}
+            />
+          </Card>
+        </div>
         {canCorrect ? (
           <div className="lg:col-span-2">
             <Card title="Correct this entry">
