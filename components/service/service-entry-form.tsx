@@ -35,7 +35,7 @@ export function ServiceEntryForm({ action, units, currency, today, currentHours,
     <form action={formAction} className="flex flex-col gap-4" noValidate>
       <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
       {other.length > 0 ? <p className="text-sm text-fail">{other.flatMap(([, messages]) => messages ?? []).join(" ")}</p> : null}
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid gap-3 sm:grid-cols-3 [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
         {correction ? null : <SelectField name="kind" label="Work done" options={SERVICE_KIND_OPTIONS} defaultValue={v.kind} onChange={(e) => setKind(e.target.value)} errors={errors.kind} />}
         <Field name="performedOn" label="Date" type="date" max={today} required defaultValue={v.performedOn} errors={errors.performedOn} />
         {correction ? null : (
@@ -43,7 +43,7 @@ export function ServiceEntryForm({ action, units, currency, today, currentHours,
         )}
       </div>
       {kind === "hose-replaced" && !correction ? (
-        <div className="grid gap-3 sm:grid-cols-2">
+        <div className="grid gap-3 sm:grid-cols-2 [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
           <div className="flex flex-col gap-1">
             <label htmlFor="field-componentId" className="text-sm font-medium text-steel-800">
               Hose replaced
@@ -63,7 +63,7 @@ export function ServiceEntryForm({ action, units, currency, today, currentHours,
       ) : null}
       {kind === "oil-sample" ? <Field name="iso4406" label="ISO 4406 code" placeholder="18/16/13" defaultValue={v.iso4406} errors={errors.iso4406} hint="Three numbers for ≥4, ≥6 and ≥14 µm(c); they never increase." /> : null}
       {kind === "relief-checked" ? (
-        <div className="grid gap-3 sm:grid-cols-2">
+        <div className="grid gap-3 sm:grid-cols-2 [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
           <Field name="reliefFound" label={`Setting found (${pressure})`} inputMode="decimal" defaultValue={v.reliefFound} errors={errors.reliefFound} />
           <Field name="reliefSet" label={`Setting left (${pressure})`} inputMode="decimal" defaultValue={v.reliefSet} errors={errors.reliefSet} hint="Never above the lowest-rated component." />
         </div>
@@ -75,7 +75,7 @@ export function ServiceEntryForm({ action, units, currency, today, currentHours,
         <textarea id="field-parts" name="parts" rows={3} defaultValue={v.parts} aria-describedby={errors.parts ? "field-parts-error" : undefined} className="rounded-md border border-steel-300 bg-white px-3 py-2" />
         <FieldError id="field-parts-error" errors={errors.parts} />
       </div>
-      <div className="grid gap-3 sm:grid-cols-3">
+      <div className="grid gap-3 sm:grid-cols-3 [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
         <Field name="cost" label={`Cost (${currency}) — optional`} inputMode="decimal" defaultValue={v.cost} errors={errors.cost} />
       </div>
       <div className="flex flex-col gap-1">

@@ -27,7 +27,7 @@ type TaskValues = { title: string; kind: string; intervalDays: string; intervalH
 function TaskFields({ state, initial, idPrefix }: { state: ActionState; initial: TaskValues; idPrefix: string }) {
   const v = state.ok ? initial : { ...initial, ...state.values };
   return (
-    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4">
+    <div className="grid gap-3 sm:grid-cols-2 lg:grid-cols-4 [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
       <Field id={`${idPrefix}-title`} name="title" label="Task" maxLength={100} required defaultValue={v.title} errors={state.fieldErrors?.title} />
       <SelectField id={`${idPrefix}-kind`} name="kind" label="Completed by a log entry of" options={SERVICE_KIND_OPTIONS} defaultValue={v.kind} errors={state.fieldErrors?.kind} />
       <Field id={`${idPrefix}-days`} name="intervalDays" label="Every … days" inputMode="numeric" defaultValue={v.intervalDays} errors={state.fieldErrors?.intervalDays} />

@@ -20,7 +20,7 @@ export function InviteForm({ action }: { action: Action }) {
   return (
     <form action={formAction} className="flex flex-col gap-3" noValidate key={state.ok ? state.message : "invite"}>
       <FormMessage message={state.message} tone={state.ok ? "success" : "error"} />
-      <div className="grid gap-3 sm:grid-cols-[2fr_1fr]">
+      <div className="grid gap-3 sm:grid-cols-[2fr_1fr] [&>*]:min-w-0 [&_select]:w-full [&_select]:min-w-0">
         <Field name="email" id="invite-email" label="E-mail address" type="email" required defaultValue={state.ok ? "" : state.values?.email} errors={state.fieldErrors?.email} />
         <SelectField name="role" id="invite-role" label="Role" options={ROLE_OPTIONS} defaultValue={state.values?.role ?? "member"} errors={state.fieldErrors?.role} />
       </div>

@@ -20,6 +20,16 @@ import { correctServiceEntryAction } from "../actions";
 
 export const metadata: Metadata = { title: "Service entry" };
 
+const FIELD_LABELS: Record<string, string> = {
+  performedOn: "Date",
+  parts: "Parts used",
+  costCents: "Cost (cents)",
+  iso4406: "ISO 4406",
+  reliefFoundBar: "Relief found (bar)",
+  reliefSetBar: "Relief left (bar)",
+  notes: "Notes",
+};
+
 function shown(value: unknown): string {
   if (value === null || value === undefined || value === "") return "—";
   if (Array.isArray(value)) return partsToText(value as { description: string; quantity: number }[]) || "—";
@@ -85,7 +95,7 @@ export default async function ServiceEntryPage({ params }: { params: Promise<{ p
                   <ul className="pl-4 text-steel-700">
                     {Object.entries(r.changes).map(([field, change]) => (
                       <li key={field}>
-                        {field}: {shown(change.from)} → {shown(change.to)}
+                        {FIELD_LABELS[field] ?? field}: {shown(change.from)} → {shown(change.to)}
                       </li>
                     ))}
                   </ul>
