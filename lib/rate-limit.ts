@@ -28,6 +28,9 @@ export interface RateLimitResult {
 /** The public sizing API: generous for a person or a script, a wall for a flood. */
 export const SIZING_API_LIMIT: RateLimitPolicy = { name: "sizing-api", limit: 120, windowMs: 60_000 };
 
+/** Password-reset requests per client address: enough for a typo or two, not for probing addresses. */
+export const PASSWORD_RESET_LIMIT: RateLimitPolicy = { name: "password-reset", limit: 5, windowMs: 15 * 60_000 };
+
 /** Rows of windows that ended this long ago are swept now and then. */
 const KEEP_MS = 60 * 60 * 1000;
 /** Share of new windows that also sweep other buckets' stale rows (the sweep scans the table). */

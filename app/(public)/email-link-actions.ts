@@ -6,10 +6,11 @@ import { z } from "zod";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { refusalState } from "@/lib/action-refusal";
 import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
-import { getCurrentSession } from "@/lib/auth/current";
+import { getCurrentSession, requestIp } from "@/lib/auth/current";
 import { createSession } from "@/lib/auth/session";
 import { acceptInvitation, signUpWithInvitation } from "@/lib/data/invitations";
 import { requestPasswordReset, resetPassword } from "@/lib/data/password-resets";
+import { hitRateLimit, PASSWORD_RESET_LIMIT } from "@/lib/rate-limit";
 import { forgotPasswordSchema, inviteSignUpSchema, resetPasswordSchema } from "@/lib/validation/email-links";
 
 const LINK_PROBLEMS = {
@@ -30,6 +31,8 @@ export async function forgotPasswordAction(_prev: ActionState, form: FormData): 
   const values = echoValues(form);
   const parsed = forgotPasswordSchema.safeParse({ email: form.get("email") });
   if (!parsed.success) return { ok: false, fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+  const limit = await hitRateLimit(PASSWORD_RESET_LIMIT, await requestIp());
+  if (!limit.allowed) return { ok: false, message: `Too many requests from here. Try again in ${Math.ceil(limit.retryAfterS / 60)} minutes.`, values };
   await requestPasswordReset(parsed.data.email, await requestOrigin());
   // The same answer whether or not an account has this address.
   return { ok: true, message: "If an account uses this address, a link to choose a new password is on its way. It works for 30 minutes." };
