@@ -10,7 +10,9 @@ import mysql from "mysql2/promise";
 import { ARGON2_PARAMS } from "../lib/auth/password-rules";
 import { newId } from "../lib/ids";
 import { migrationDatabaseUrl } from "./config";
+import { addLocalDays, localDate } from "../lib/schedule";
 import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
+import { DEMO_SERVICE } from "./demo-service";
 import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
 import * as schema from "./schema";
 
@@ -21,8 +23,23 @@ function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferIns
 
 type Tx = Parameters<Parameters<ReturnType<typeof drizzle<typeof schema>>["transaction"]>[0]>[0];
 
+/** A demo press's service log and plan (db/demo-service.ts), dated back from today in the shop's zone. */
+async function insertService(tx: Tx, pressId: string, p: DemoPress, people: { manager: string; inspector: string }, timeZone: string): Promise<void> {
+  const demo = DEMO_SERVICE[p.name];
+  if (!demo) return;
+  const today = localDate(new Date(), timeZone);
+  for (const e of demo.entries) {
+    const { daysAgo, by, ...fields } = e;
+    await tx.insert(schema.serviceEntries).values({ id: newId(), pressId, ...fields, parts: e.parts ?? [], performedOn: addLocalDays(today, -daysAgo), performedBy: people[by] });
+  }
+  for (const t of demo.tasks) {
+    const { lastDaysAgo, lastHours, ...fields } = t;
+    await tx.insert(schema.serviceTasks).values({ id: newId(), pressId, ...fields, lastDoneOn: addLocalDays(today, -lastDaysAgo), lastDoneHours: lastHours });
+  }
+}
+
 /** A demo press with its parts and hour-meter log. */
-async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<void> {
+async function insertPress(tx: Tx, shopId: string, p: DemoPress, service?: { people: { manager: string; inspector: string }; timeZone: string }): Promise<void> {
   const row = pressRow(shopId, p);
   await tx.insert(schema.presses).values(row);
   const parts = DEMO_PARTS[p.name] ?? [];
@@ -37,6 +54,7 @@ async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<void> 
       readings.map(([hours, daysAgo]) => ({ pressId: row.id!, hours, readAt: new Date(Date.now() - daysAgo * 86_400_000) })),
     );
   }
+  if (service) await insertService(tx, row.id!, p, service.people, service.timeZone);
 }
 
 export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
@@ -62,7 +80,8 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
       for (const [key, role] of Object.entries(WORKSHOP.roles)) {
         await tx.insert(schema.memberships).values({ shopId: workshopId, userId: ids[key]!, role });
       }
-      for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p);
+      const people = { manager: ids.manager!, inspector: ids.inspector! };
+      for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p, { people, timeZone: WORKSHOP.timeZone });
     });
     return true;
   } finally {

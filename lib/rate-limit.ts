@@ -35,6 +35,8 @@ export const SIZING_API_LIMIT: RateLimitPolicy = { name: "sizing-api", limit: 12
  */
 export const SIGN_UP_ADDRESS_LIMIT: RateLimitPolicy = { name: "sign-up-address", limit: 5, windowMs: 60 * 60_000 };
 export const SIGN_UP_IP_LIMIT: RateLimitPolicy = { name: "sign-up-ip", limit: 30, windowMs: 60 * 60_000 };
+/** Password-reset requests per client address: enough for a typo or two, not for probing addresses. */
+export const PASSWORD_RESET_LIMIT: RateLimitPolicy = { name: "password-reset", limit: 5, windowMs: 15 * 60_000 };
 
 /** Rows of windows that ended this long ago are swept now and then. */
 const KEEP_MS = 60 * 60 * 1000;

@@ -14,6 +14,11 @@ assert_port_free "$PORT"
 ensure_node_modules "$ROOT"
 bash scripts/db.sh start
 if [[ "${UPLOADTHING_LOCAL_FAKE:-}" == 1 ]]; then bash scripts/fake-uploadthing/start.sh; fi
+# No SMTP server named: mail goes to the local SMTP fake (read it at /dev/outbox under npm run dev,
+# or from its messages API on SMTP_API_PORT).
+if [[ -z "${SMTP_HOST:-}" ]]; then bash scripts/fake-smtp/start.sh; fi
+# The reminder job's secret: generated per start unless the environment sets one.
+export JOBS_SECRET="${JOBS_SECRET:-$(node -e 'process.stdout.write(require("crypto").randomBytes(24).toString("hex"))')}"
 npx tsx scripts/migrate.ts
 npx tsx db/seed.ts --quiet
 export NEXT_TELEMETRY_DISABLED=1
@@ -23,7 +28,9 @@ npx next build
 export NODE_ENV=production INSECURE_COOKIES="${INSECURE_COOKIES:-1}" PORT
 node scripts/server.mjs &
 SERVER_PID=$!
-trap 'kill "$SERVER_PID" 2>/dev/null || true' INT TERM
+node scripts/reminder-loop.mjs "http://127.0.0.1:$PORT" &
+REMINDER_PID=$!
+trap 'kill "$SERVER_PID" "$REMINDER_PID" 2>/dev/null || true' INT TERM EXIT
 node scripts/wait-for-health.mjs "http://127.0.0.1:$PORT/api/health" 90 || { kill "$SERVER_PID" 2>/dev/null; exit 1; }
 kill -0 "$SERVER_PID" 2>/dev/null || { echo "The app server stopped; see the messages above." >&2; exit 1; }
 npx tsx db/seed.ts --print-only

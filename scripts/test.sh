@@ -68,6 +68,7 @@ mkdir -p "$RESULTS"
 rm -f "$RESULTS"/*.json
 bash scripts/db.sh start
 FAKE_UT_DIR="$ROOT/.data/uploads-test" bash scripts/fake-uploadthing/start.sh
+FAKE_SMTP_DIR="$ROOT/.data/mail-test" bash scripts/fake-smtp/start.sh
 fresh_test_database
 
 check "typecheck" npx tsc --noEmit

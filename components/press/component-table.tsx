@@ -5,6 +5,7 @@ import Link from "next/link";
 import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { DataTable } from "@/components/ui/data-table";
+import { FilterSelect } from "@/components/ui/filter-select";
 import type { ComponentRow } from "@/lib/data/components";
 import { fetchJson } from "@/lib/fetch-json";
 import { KIND_LABELS } from "@/lib/press/component-fields";
@@ -63,17 +64,7 @@ export function ComponentTable({ pressId, initial, units, currency, canEdit }: P
   if ((data?.components ?? []).length === 0) return <p className="text-sm text-steel-600">No parts recorded yet.</p>;
   return (
     <div className="flex flex-col gap-3">
-      <label className="flex max-w-xs flex-col gap-1 text-sm">
-        <span className="font-medium text-steel-800">Show</span>
-        <select value={kind} onChange={(e) => setKind(e.target.value)} className="min-h-11 rounded-md border border-steel-300 bg-white px-3">
-          <option value="all">All parts</option>
-          {kindsPresent.map((k) => (
-            <option key={k} value={k}>
-              {KIND_LABELS[k]}
-            </option>
-          ))}
-        </select>
-      </label>
+      <FilterSelect value={kind} onChange={setKind} allLabel="All parts" options={kindsPresent.map((k) => ({ value: k, label: KIND_LABELS[k] }))} />
       {error ? <p className="text-sm text-fail">Could not refresh the parts: {(error as Error).message}</p> : null}
       <div className="relative overflow-x-auto">
         <DataTable table={table} minWidth="40rem" testId="component-list" cellClass="px-2 py-2" />

@@ -7,3 +7,5 @@ export * from "./components";
 export * from "./photos";
 export * from "./outbox";
 export * from "./tag-outs";
+export * from "./service";
+export * from "./invitations";

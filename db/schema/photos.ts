@@ -4,14 +4,15 @@ import { users } from "./auth";
 import { ID_LENGTH, utc } from "./columns";
 import { components } from "./components";
 import { presses } from "./presses";
+import { serviceEntries } from "./service";
 
 export const PHOTO_KINDS = ["weld", "leak", "damage", "die", "other"] as const;
 
 /**
  * A photo after the server re-encoded it (no EXIF/GPS left) — the original upload is deleted, so
  * only these two stored files exist. It always belongs to a press and optionally to one record on
- * it; the target columns for service-log entries, inspection items and problem reports gain their
- * foreign keys when those tables arrive.
+ * it; the target columns for inspection items and problem reports gain their foreign keys when
+ * those tables arrive.
  */
 export const photos = mysqlTable(
   "photos",
@@ -21,7 +22,7 @@ export const photos = mysqlTable(
       .notNull()
       .references(() => presses.id, { onDelete: "cascade" }),
     componentId: varchar("component_id", { length: ID_LENGTH }).references(() => components.id, { onDelete: "set null" }),
-    serviceEntryId: varchar("service_entry_id", { length: ID_LENGTH }),
+    serviceEntryId: varchar("service_entry_id", { length: ID_LENGTH }).references(() => serviceEntries.id, { onDelete: "set null" }),
     inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }),
     problemReportId: varchar("problem_report_id", { length: ID_LENGTH }),
     kind: mysqlEnum("kind", PHOTO_KINDS).notNull().default("other"),

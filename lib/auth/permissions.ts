@@ -21,7 +21,7 @@ export const ACTIONS = {
   recordHours: ["manager", "inspector", "member"],
   /** Correct a wrong hour-meter reading (kept in the history with who and why). */
   correctHours: ["manager"],
-  logService: ["manager"],
+  logService: ["manager", "inspector"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
   signInspection: ["manager", "inspector"],

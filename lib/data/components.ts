@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { components } from "@/db/schema";
-import { NotFoundError } from "@/lib/auth/permissions";
+import { NotFoundError, type Action } from "@/lib/auth/permissions";
 import { ConflictError } from "@/lib/errors";
 import { newId } from "@/lib/ids";
 import { SPEC_SCHEMAS, type ComponentSpec } from "@/lib/validation/component-spec";
@@ -33,13 +33,13 @@ export async function createComponent(actor: Actor, pressId: string, input: Comp
   });
 }
 
-/** The component and the actor's access to its press, row-locked when asked. */
-async function componentAccess(executor: Executor, actor: Actor, componentId: string, forUpdate: boolean) {
+/** The component and the actor's access to its press (checked for `action`), row-locked when asked. */
+async function componentAccess(executor: Executor, actor: Actor, componentId: string, forUpdate: boolean, action: Action = "editPress") {
   const query = executor.select().from(components).where(eq(components.id, componentId)).limit(1);
   const [row] = forUpdate ? await query.for("update") : await query;
   if (!row) throw new NotFoundError("Component not found");
   // Not a member of the press's shop reads as not-found too.
-  const access = await pressAccess(executor, actor, row.pressId, "editPress", { forUpdate });
+  const access = await pressAccess(executor, actor, row.pressId, action, { forUpdate });
   return { row, access };
 }
 
@@ -86,15 +86,17 @@ export async function deleteComponent(actor: Actor, componentId: string): Promis
 /**
  * Replaces a part: the new one is installed and the old one is kept with its removal date, the
  * reason and a link to its successor — all in one transaction, so nothing is half-replaced.
- * Authorization: managers. The replacement must be of the same kind.
+ * Authorization: managers — or, for a hose replacement logged in the service log, whoever may log
+ * service (`action: "logService"`, inside the log entry's transaction). Same kind only.
  */
 export async function replaceComponent(
   actor: Actor,
   componentId: string,
   input: { reason: string; removedOn: string; replacement: ComponentInput },
+  options: { executor?: Executor; action?: "editPress" | "logService" } = {},
 ): Promise<{ id: string }> {
-  return db.transaction(async (tx) => {
-    const { row, access } = await componentAccess(tx, actor, componentId, true);
+  return (options.executor ?? db).transaction(async (tx) => {
+    const { row, access } = await componentAccess(tx, actor, componentId, true, options.action);
     assertNotRetired(access);
     if (row.removedOn) throw new ConflictError("This part was already removed.");
     if (input.replacement.kind !== row.kind) throw new ConflictError("A part can only be replaced by one of the same kind.");

@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, memberships, photos, presses, users } from "@/db/schema";
+import { components, memberships, photos, presses, serviceEntries, users } from "@/db/schema";
 import { assertCan, canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { photoFileUrl, type PhotoVariant } from "@/lib/photos/file-urls";
 import type { PhotoKind } from "@/lib/photos/kinds";
@@ -30,7 +30,7 @@ export type PhotoView = {
 };
 
 /** The record a photo is attached to, after the server checked it. */
-export type PhotoTarget = { pressId: string; componentId: string | null };
+export type PhotoTarget = { pressId: string; componentId: string | null; serviceEntryId?: string | null };
 export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
 export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
 
@@ -66,7 +66,7 @@ function selectViews() {
  */
 export async function authorizePhotoTarget(
   actor: Actor,
-  target: { pressId: string; componentId?: string | null },
+  target: { pressId: string; componentId?: string | null; serviceEntryId?: string | null },
   executor: Executor = db,
 ): Promise<PhotoTarget> {
   const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
@@ -80,7 +80,16 @@ export async function authorizePhotoTarget(
       .limit(1);
     if (!part) throw new NotFoundError("Part not found on this press");
   }
-  return { pressId: target.pressId, componentId };
+  const serviceEntryId = target.serviceEntryId ?? null;
+  if (serviceEntryId) {
+    const [entry] = await executor
+      .select({ id: serviceEntries.id })
+      .from(serviceEntries)
+      .where(and(eq(serviceEntries.id, serviceEntryId), eq(serviceEntries.pressId, target.pressId)))
+      .limit(1);
+    if (!entry) throw new NotFoundError("Service entry not found on this press");
+  }
+  return { pressId: target.pressId, componentId, serviceEntryId };
 }
 
 /**
@@ -94,6 +103,7 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
       id: photo.id,
       pressId: target.pressId,
       componentId: target.componentId,
+      serviceEntryId: target.serviceEntryId ?? null,
       kind: photo.kind,
       caption: photo.caption,
       uploadedBy: actor.userId,
@@ -123,6 +133,17 @@ export async function listPressPhotos(actor: Actor, pressId: string, options: { 
   const rows = await selectViews()
     .where(and(eq(photos.pressId, pressId), options.kind ? eq(photos.kind, options.kind) : undefined))
     .orderBy(desc(photos.createdAt), desc(photos.id));
+  const now = Date.now();
+  return rows.map((row) => withFileUrls(row, now));
+}
+
+/** Photos of one service entry, newest first (at most 50). Authorization: members of the press's shop. */
+export async function listServiceEntryPhotos(actor: Actor, pressId: string, entryId: string): Promise<PhotoView[]> {
+  await pressAccess(db, actor, pressId, "viewPress");
+  const rows = await selectViews()
+    .where(and(eq(photos.pressId, pressId), eq(photos.serviceEntryId, entryId)))
+    .orderBy(desc(photos.createdAt), desc(photos.id))
+    .limit(50);
   const now = Date.now();
   return rows.map((row) => withFileUrls(row, now));
 }

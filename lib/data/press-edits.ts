@@ -61,9 +61,16 @@ async function lastValidReading(tx: Executor, pressId: string): Promise<LastRead
  * Records an hour-meter reading. It may never be lower than the last one, nor higher than the time
  * since the last one allows (lib/press/hour-meter.ts): the press row is locked so two readings at
  * once cannot both pass the check. Authorization: any member of the shop.
+ * Pass `executor` to record it inside a caller's transaction (e.g. with a service-log entry).
  */
-export async function recordHourMeter(actor: Actor, pressId: string, input: { hours: number; note?: string | null }, now = new Date()): Promise<void> {
-  await db.transaction(async (tx) => {
+export async function recordHourMeter(
+  actor: Actor,
+  pressId: string,
+  input: { hours: number; note?: string | null },
+  now = new Date(),
+  executor: Executor = db,
+): Promise<void> {
+  await executor.transaction(async (tx) => {
     const access = await pressAccess(tx, actor, pressId, "recordHours", { forUpdate: true });
     assertNotRetired(access);
     const problem = hourReadingProblem(await lastValidReading(tx, pressId), input.hours, now, access.hourMeter);

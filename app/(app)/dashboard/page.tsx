@@ -1,18 +1,21 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { DueList, type DueRow } from "@/components/due/due-list";
 import { PressCard } from "@/components/press/press-card";
 import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
 import { listPresses } from "@/lib/data/presses";
+import { listDueForActor } from "@/lib/data/service-due";
 import { LIFECYCLE_LABELS } from "@/lib/press-labels";
 
 export const metadata: Metadata = { title: "Dashboard" };
 
 export default async function DashboardPage() {
   const { user, shop } = await requireShopContext();
-  const presses = await listPresses({ userId: user.id }, shop.id);
+  const [presses, due] = await Promise.all([listPresses({ userId: user.id }, shop.id), listDueForActor({ userId: user.id }, { shopId: shop.id })]);
+  const dueRows: DueRow[] = due.map((d) => ({ key: `${d.kind}:${d.taskId}`, kind: d.kind, title: d.title, pressName: d.pressName, href: `/presses/${d.pressId}#service`, state: d.state, dueDate: d.dueDate, dueHours: d.dueHours }));
   const byLifecycle = Object.entries(LIFECYCLE_LABELS).map(([key, label]) => ({
     label,
     count: presses.filter((p) => p.lifecycle === key).length,
@@ -63,10 +66,8 @@ export default async function DashboardPage() {
               ))}
             </dl>
           </Card>
-          <Card title="Due soon">
-            <p className="text-sm text-steel-600">
-              Service and inspection due dates appear here once a service plan and inspection cadence are set for a press.
-            </p>
+          <Card title="Due soon and overdue">
+            <DueList rows={dueRows} timeZone={shop.timeZone} testId="due-list" empty="Nothing due. Set a service plan on a press in service to see what falls due." />
           </Card>
         </div>
       </div>

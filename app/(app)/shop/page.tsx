@@ -4,7 +4,8 @@ import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
-import { canEditShop } from "@/lib/auth/permissions";
+import { can, canEditShop } from "@/lib/auth/permissions";
+import { ShopInvitations } from "@/components/shop/invitations";
 import { listMembers } from "@/lib/data/shops";
 
 export const metadata: Metadata = { title: "Shop" };
@@ -37,8 +38,12 @@ export default async function ShopPage() {
             </li>
           ))}
         </ul>
-        <p className="mt-3 text-xs text-steel-500">Invitations by e-mail will be sent from here.</p>
       </Card>
+      {can(shop.role, "manageMembers") ? (
+        <Card title="Invite by e-mail" className="mt-4">
+          <ShopInvitations userId={user.id} shopId={shop.id} />
+        </Card>
+      ) : null}
     </>
   );
 }

@@ -1,4 +1,5 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { redirect } from "next/navigation";
 import { SignInForm } from "@/components/auth/sign-in-form";
 import { Card } from "@/components/ui/card";
@@ -8,8 +9,12 @@ import { safeNextPath } from "@/lib/auth/safe-next";
 
 export const metadata: Metadata = { title: "Sign in" };
 
-export default async function SignInPage({ searchParams }: { searchParams: Promise<{ next?: string; "signed-up"?: string }> }) {
-  const { next: rawNext, "signed-up": signedUp } = await searchParams;
+export default async function SignInPage({
+  searchParams,
+}: {
+  searchParams: Promise<{ next?: string; "signed-up"?: string; reset?: string }>;
+}) {
+  const { next: rawNext, "signed-up": signedUp, reset } = await searchParams;
   // Only a path that stays on this site is carried into the form (and followed after sign-in).
   const next = safeNextPath(rawNext, "");
   if (await getCurrentSession()) redirect(next || "/dashboard");
@@ -25,9 +30,19 @@ export default async function SignInPage({ searchParams }: { searchParams: Promi
           />
         </div>
       ) : null}
+      {reset ? (
+        <div className="mb-4">
+          <FormMessage tone="success" message="Password changed. Sign in with the new one." />
+        </div>
+      ) : null}
       <Card>
         <SignInForm next={next || undefined} />
       </Card>
+      <p className="mt-4 text-sm">
+        <Link href="/forgot-password" className="underline">
+          Forgot your password?
+        </Link>
+      </p>
     </div>
   );
 }

@@ -10,7 +10,7 @@ const EXPECTED: Record<Action, Role[]> = {
   editPress: ["manager"],
   recordHours: ["manager", "inspector", "member"],
   correctHours: ["manager"],
-  logService: ["manager"],
+  logService: ["manager", "inspector"],
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
   signInspection: ["manager", "inspector"],

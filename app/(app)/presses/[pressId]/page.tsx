@@ -6,6 +6,7 @@ import { FreshSWR } from "@/components/ui/fresh-swr";
 import { PressPhotos } from "@/components/photos/press-photos";
 import { HourCorrectionForm, HourMeterForm } from "@/components/press/hour-meter-form";
 import { PressTimeline } from "@/components/press/press-timeline";
+import { PressService } from "@/components/service/press-service";
 import { SafetyCautions } from "@/components/sizing/safety-cautions";
 import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
@@ -79,6 +80,7 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           {[
             ["#as-built", "As-built check"],
             ["#components", "Parts"],
+            ["#service", "Service"],
             ["#photos", "Photos"],
             ["#history", "History"],
           ].map(([href, label]) => (
@@ -118,6 +120,9 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
             </FreshSWR>
           </Card>
         </div>
+        <div id="service" className="lg:col-span-2">
+          <PressService pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} units={units} currency={press.currency} />
+        </div>
         <Card title="Hour meter">
           <p className="mb-3 text-sm text-steel-600">
             Last reading {press.hourMeter} h. Readings never go backwards, nor forward by more than the time that has passed.
@@ -132,7 +137,7 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         </div>
         <div id="photos" className="lg:col-span-2">
           <PressPhotos pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} />
-          <p className="mt-2 text-sm text-steel-600">The service log, inspections and bookings of this press will appear on this page as they are added to Presswright.</p>
+          <p className="mt-2 text-sm text-steel-600">Inspections and bookings of this press will appear on this page as they are added to Presswright.</p>
         </div>
         <div className="lg:col-span-2">
           <SafetyCautions compact />
