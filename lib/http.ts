@@ -5,7 +5,7 @@ import { isSameOriginRequest } from "@/lib/auth/csrf";
 import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
-import { ConflictError, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
+import { BusyError, ConflictError, DATABASE_UNAVAILABLE_MESSAGE, FieldError, isDatabaseUnavailable, LockedError } from "@/lib/errors";
 
 export function jsonError(status: number, error: string, extra?: Record<string, unknown>, init?: ResponseInit): NextResponse {
   return NextResponse.json({ error, ...extra }, { ...init, status });
@@ -52,13 +52,26 @@ export function apiRoute<C>(handler: Handler<C>, options: { csrf?: boolean } = {
   };
 }
 
+/** Strict schemas refuse unknown keys at the object level; name each key as a field of its own. */
+function unknownKeys(error: z.ZodError): Record<string, string[]> {
+  const out: Record<string, string[]> = {};
+  for (const issue of error.issues) {
+    if (issue.code !== "unrecognized_keys") continue;
+    for (const key of issue.keys) out[[...issue.path, key].join(".")] = ["Unknown field."];
+  }
+  return out;
+}
+
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof UnauthorizedError) return jsonError(401, error.message);
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
   if (error instanceof ConflictError) return jsonError(409, error.message);
+  if (error instanceof LockedError) return jsonError(423, error.message);
+  if (error instanceof FieldError) return jsonError(400, error.message, { fieldErrors: { [error.field]: [error.message] } });
+  if (error instanceof BusyError) return jsonError(503, error.message, undefined, { headers: { "Retry-After": "2" } });
   if (error instanceof z.ZodError) {
-    return jsonError(400, "Invalid request.", { fieldErrors: z.flattenError(error).fieldErrors });
+    return jsonError(400, "Invalid request.", { fieldErrors: { ...z.flattenError(error).fieldErrors, ...unknownKeys(error) } });
   }
   if (isDatabaseUnavailable(error)) {
     return jsonError(503, DATABASE_UNAVAILABLE_MESSAGE, undefined, { headers: { "Retry-After": "5" } });
