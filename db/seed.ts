@@ -11,7 +11,9 @@ import { ARGON2_PARAMS } from "../lib/auth/password-rules";
 import { newId } from "../lib/ids";
 import { migrationDatabaseUrl } from "./config";
 import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
-import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
+import { fromWallTime, startOfLocalDay, toWallTime } from "../lib/time-zone";
+import { BUILDER_PRESSES, DEMO_BOOKINGS, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
+import { bookings } from "./schema/bookings";
 import * as schema from "./schema";
 
 function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferInsert {
@@ -22,7 +24,7 @@ function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferIns
 type Tx = Parameters<Parameters<ReturnType<typeof drizzle<typeof schema>>["transaction"]>[0]>[0];
 
 /** A demo press with its parts and hour-meter log. */
-async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<void> {
+async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<string> {
   const row = pressRow(shopId, p);
   await tx.insert(schema.presses).values(row);
   const parts = DEMO_PARTS[p.name] ?? [];
@@ -37,6 +39,17 @@ async function insertPress(tx: Tx, shopId: string, p: DemoPress): Promise<void> 
       readings.map(([hours, daysAgo]) => ({ pressId: row.id!, hours, readAt: new Date(Date.now() - daysAgo * 86_400_000) })),
     );
   }
+  return row.id!;
+}
+
+/** The demo bookings, on whole hours in the workshop's zone from the day the seed runs. */
+function demoBookings(pressIds: Map<string, string>, userIds: Record<string, string>): (typeof bookings.$inferInsert)[] {
+  return DEMO_BOOKINGS.map(([press, who, days, hour, length]) => {
+    const day = startOfLocalDay(new Date(), WORKSHOP.timeZone, days);
+    const w = toWallTime(day, WORKSHOP.timeZone);
+    const startsAt = fromWallTime({ year: w.year, month: w.month, day: w.day, hour, minute: 0 }, WORKSHOP.timeZone);
+    return { id: newId(), pressId: pressIds.get(press)!, userId: userIds[who]!, startsAt, endsAt: new Date(startsAt.getTime() + length * 3_600_000) };
+  });
 }
 
 export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
@@ -62,7 +75,9 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
       for (const [key, role] of Object.entries(WORKSHOP.roles)) {
         await tx.insert(schema.memberships).values({ shopId: workshopId, userId: ids[key]!, role });
       }
-      for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p);
+      const pressIds = new Map<string, string>();
+      for (const p of WORKSHOP_PRESSES) pressIds.set(p.name, await insertPress(tx, workshopId, p));
+      await tx.insert(bookings).values(demoBookings(pressIds, ids));
     });
     return true;
   } finally {

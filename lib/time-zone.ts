@@ -90,3 +90,10 @@ export function parseLocal(date: string, time: string, timeZone: string): Date |
   if (wall.month < 1 || wall.month > 12 || wall.day < 1 || wall.day > 31 || wall.hour > 23 || wall.minute > 59) return null;
   return fromWallTime(wall, timeZone);
 }
+
+/** "2026-07-15 09:00–11:00 (Europe/London)" */
+export function slotText(slot: { startsAt: Date; endsAt: Date }, timeZone: string): string {
+  const sameDay = localDate(slot.startsAt, timeZone) === localDate(slot.endsAt, timeZone);
+  const end = sameDay ? localTime(slot.endsAt, timeZone) : `${localDate(slot.endsAt, timeZone)} ${localTime(slot.endsAt, timeZone)}`;
+  return `${localDate(slot.startsAt, timeZone)} ${localTime(slot.startsAt, timeZone)}–${end} (${timeZone})`;
+}

@@ -6,7 +6,7 @@ import { memberships, presses, shops, users } from "@/db/schema";
 import { assertCan, NotFoundError } from "@/lib/auth/permissions";
 import { checkSlot, type Slot } from "@/lib/booking-rules";
 import { appUrl } from "@/lib/app-url";
-import { bookingCancelled, bookingConfirmation, bookingIcs } from "@/lib/email/shop-messages";
+import { bookingCancelled, bookingConfirmation, bookingIcs, tagOutNotice } from "@/lib/email/shop-messages";
 import { enqueueEmail } from "@/lib/email/outbox";
 import { ConflictError, LockedError } from "@/lib/errors";
 import { newId } from "@/lib/ids";
@@ -186,4 +186,36 @@ export async function cancelBooking(actor: Actor, bookingId: string, now = new D
     shopId: row.shopId,
     detail: { bookingId, pressId: row.pressId, holder: row.userId, startsAt: row.startsAt.toISOString(), endsAt: row.endsAt.toISOString() },
   });
+}
+
+/**
+ * E-mails everyone holding a booking of the press that has not ended: it was just tagged out.
+ * Runs in the caller's transaction (the one that tagged it out), after the caller authorized the
+ * tag-out. One message per holder listing their slots; bounded to the next 500 bookings.
+ */
+export async function notifyHoldersOfTagOut(executor: Parameters<typeof loadStatuses>[0], pressId: string, reason: string, now = new Date()): Promise<number> {
+  const rows = await executor
+    .select({ userId: bookings.userId, email: users.email, name: users.displayName, startsAt: bookings.startsAt, endsAt: bookings.endsAt, pressName: presses.name, shopId: shops.id, shopName: shops.name, timeZone: shops.timeZone })
+    .from(bookings)
+    .innerJoin(users, eq(users.id, bookings.userId))
+    .innerJoin(presses, eq(presses.id, bookings.pressId))
+    .innerJoin(shops, eq(shops.id, presses.shopId))
+    .where(and(eq(bookings.pressId, pressId), gt(bookings.endsAt, now)))
+    .orderBy(asc(bookings.startsAt))
+    .limit(500);
+  const byHolder = new Map<string, typeof rows>();
+  for (const row of rows) byHolder.set(row.userId, [...(byHolder.get(row.userId) ?? []), row]);
+  for (const slots of byHolder.values()) {
+    const first = slots[0]!;
+    const message = tagOutNotice({ shopName: first.shopName, pressName: first.pressName, holderName: first.name, reason, slots, timeZone: first.timeZone });
+    await enqueueEmail(executor, { kind: "tag-out-alert", to: first.email, shopId: first.shopId, ...message });
+  }
+  return byHolder.size;
+}
+
+/** The time zone a press is booked in (its shop's). Authorization: members of the press's shop. */
+export async function getPressTimeZone(actor: Actor, pressId: string): Promise<string> {
+  const access = await pressAccess(db, actor, pressId, "viewPress");
+  const [row] = await db.select({ timeZone: shops.timeZone }).from(shops).where(eq(shops.id, access.shopId));
+  return row?.timeZone ?? "UTC";
 }

@@ -5,20 +5,13 @@
  */
 import { createEvent } from "ics";
 import type { StoredAttachment } from "@/db/schema/outbox";
-import { localDate, localTime } from "@/lib/time-zone";
+import { slotText } from "@/lib/time-zone";
 
 export type Message = { subject: string; text: string; html: string; attachments?: StoredAttachment[] };
 type Slot = { startsAt: Date; endsAt: Date };
 
 const escapeHtml = (s: string): string =>
   s.replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]!);
-
-/** "2026-07-15 09:00–11:00 (Europe/London)" */
-export function slotText(slot: Slot, timeZone: string): string {
-  const sameDay = localDate(slot.startsAt, timeZone) === localDate(slot.endsAt, timeZone);
-  const end = sameDay ? localTime(slot.endsAt, timeZone) : `${localDate(slot.endsAt, timeZone)} ${localTime(slot.endsAt, timeZone)}`;
-  return `${localDate(slot.startsAt, timeZone)} ${localTime(slot.startsAt, timeZone)}–${end} (${timeZone})`;
-}
 
 function page(paragraphs: string[], list: string[] = []): string {
   const items = list.length ? `<ul>${list.map((l) => `<li>${escapeHtml(l)}</li>`).join("")}</ul>` : "";

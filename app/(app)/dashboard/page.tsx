@@ -5,6 +5,7 @@ import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
+import { listShopStatuses } from "@/lib/data/press-status";
 import { listPresses } from "@/lib/data/presses";
 import { LIFECYCLE_LABELS } from "@/lib/press-labels";
 
@@ -12,7 +13,7 @@ export const metadata: Metadata = { title: "Dashboard" };
 
 export default async function DashboardPage() {
   const { user, shop } = await requireShopContext();
-  const presses = await listPresses({ userId: user.id }, shop.id);
+  const [presses, statuses] = await Promise.all([listPresses({ userId: user.id }, shop.id), listShopStatuses({ userId: user.id }, shop.id)]);
   const byLifecycle = Object.entries(LIFECYCLE_LABELS).map(([key, label]) => ({
     label,
     count: presses.filter((p) => p.lifecycle === key).length,
@@ -47,7 +48,7 @@ export default async function DashboardPage() {
           ) : (
             <div className="grid gap-3 sm:grid-cols-2">
               {presses.map((press) => (
-                <PressCard key={press.id} press={press} units={user.unitSystem} />
+                <PressCard key={press.id} press={press} units={user.unitSystem} status={statuses.get(press.id)} />
               ))}
             </div>
           )}

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { createBooking, listPressBookings } from "@/lib/data/bookings";
 import { apiRoute, requireApiSession } from "@/lib/http";
-import { bookingInputSchema, bookingWindowSchema } from "@/lib/validation/booking";
+import { bookingInputSchema, bookingWindowSchema } from "@/lib/validation/shop-use";
 
 type Context = { params: Promise<{ pressId: string }> };
 
