@@ -42,8 +42,8 @@ export default async function BookingsPage({ searchParams }: { searchParams: Sea
           <p className="text-sm text-steel-600">This shop has no presses yet.</p>
         </Card>
       ) : (
-        <div className="grid gap-4 lg:grid-cols-[1fr_2fr] [&>*]:min-w-0">
-          <div className="flex flex-col gap-4">
+        <div className="flex flex-col gap-4">
+          <div className="grid gap-4 lg:grid-cols-2 [&>*]:min-w-0">
             <Card title="Book a press">
               <BookingForm presses={presses} defaultPressId={press?.id} today={localDate(now, zone)} timeZone={zone} />
             </Card>

@@ -122,6 +122,9 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
                     Book
                   </Link>
                 ) : null}
+                <a href="#problems" className={buttonClass("secondary")}>
+                  Report a problem
+                </a>
                 <Link href={`/presses/${pressId}/status-card`} className={buttonClass("secondary")}>
                   Status page and QR card
                 </Link>

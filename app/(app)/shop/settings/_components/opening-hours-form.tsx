@@ -27,15 +27,17 @@ export function OpeningHoursForm({ hours }: { hours: OpeningHours | null }) {
         {WEEKDAY_NAMES.map((day, i) => {
           const h = hours?.[i] ?? undefined;
           return (
-            <li key={day} className="flex flex-wrap items-center gap-2 text-sm">
-              <label className="flex w-32 items-center gap-2">
+            <li key={day} className="grid grid-cols-[5.75rem_minmax(0,1fr)_auto_minmax(0,1fr)] items-center gap-x-2 gap-y-1 text-sm">
+              <label className="flex items-center gap-2">
                 <input type="checkbox" name={`open-${i}`} defaultChecked={checked(`open-${i}`, hours ? Boolean(h) : i < 6)} className="h-5 w-5" />
                 {day}
               </label>
-              <input aria-label={`${day} opens`} type="time" name={`opens-${i}`} defaultValue={time(`opens-${i}`, h?.opens ?? 9 * 60)} className="min-h-10 rounded-md border border-steel-300 px-2" aria-describedby={`day-${i}-error`} />
+              <input aria-label={`${day} opens`} type="time" name={`opens-${i}`} defaultValue={time(`opens-${i}`, h?.opens ?? 9 * 60)} className="min-h-10 w-full min-w-0 rounded-md border border-steel-300 px-1 text-sm" aria-describedby={`day-${i}-error`} />
               <span aria-hidden="true">–</span>
-              <input aria-label={`${day} closes`} type="time" name={`closes-${i}`} defaultValue={time(`closes-${i}`, h?.closes ?? 18 * 60)} className="min-h-10 rounded-md border border-steel-300 px-2" aria-describedby={`day-${i}-error`} />
-              <FieldError id={`day-${i}-error`} errors={state.fieldErrors?.[`day-${i}`]} />
+              <input aria-label={`${day} closes`} type="time" name={`closes-${i}`} defaultValue={time(`closes-${i}`, h?.closes ?? 18 * 60)} className="min-h-10 w-full min-w-0 rounded-md border border-steel-300 px-1 text-sm" aria-describedby={`day-${i}-error`} />
+              <div className="col-span-4">
+                <FieldError id={`day-${i}-error`} errors={state.fieldErrors?.[`day-${i}`]} />
+              </div>
             </li>
           );
         })}
