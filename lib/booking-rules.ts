@@ -91,3 +91,26 @@ export function freeStretches(
   if (cursor < to) free.push({ startsAt: new Date(cursor), endsAt: new Date(to) });
   return free.filter((s) => minutes(s.endsAt.getTime() - s.startsAt.getTime()) >= MIN_SLOT_MINUTES);
 }
+
+type Due = { state: "due-soon" | "overdue" };
+
+/**
+ * Warnings for a slot (the booking still goes ahead): inspections overdue or falling due before
+ * the slot ends; service tasks overdue, due by date before the slot ends, or due soon by hours
+ * (hours run with use, so no date can be promised).
+ */
+export function slotWarnings(
+  inspections: readonly (Due & { name: string; dueAt: Date | null })[],
+  service: readonly (Due & { title: string; dueDate: Date | null; dueHours: number | null })[],
+  slot: Slot,
+): string[] {
+  const before = (d: Date | null): boolean => d !== null && d.getTime() <= slot.endsAt.getTime();
+  return [
+    ...inspections
+      .filter((i) => i.state === "overdue" || before(i.dueAt))
+      .map((i) => (i.state === "overdue" ? `Inspection overdue: ${i.name}.` : `Inspection falls due before your slot ends: ${i.name}.`)),
+    ...service
+      .filter((s) => s.state === "overdue" || before(s.dueDate) || (s.dueDate === null && s.dueHours !== null))
+      .map((s) => (s.state === "overdue" ? `Service overdue: ${s.title}.` : s.dueDate ? `Service falls due before your slot ends: ${s.title}.` : `Service due soon, at ${s.dueHours} h on the meter: ${s.title}.`)),
+  ];
+}

@@ -4,7 +4,7 @@ import { db } from "@/db/client";
 import { bookings } from "@/db/schema/bookings";
 import { memberships, presses, shops, users } from "@/db/schema";
 import { assertCan, NotFoundError } from "@/lib/auth/permissions";
-import { checkSlot, type Slot } from "@/lib/booking-rules";
+import { checkSlot, slotWarnings, type Slot } from "@/lib/booking-rules";
 import { appUrl } from "@/lib/app-url";
 import { bookingCancelled, bookingConfirmation, bookingIcs, tagOutNotice } from "@/lib/email/shop-messages";
 import { enqueueEmail } from "@/lib/email/outbox";
@@ -26,18 +26,10 @@ export type BookingView = { id: string; pressId: string; pressName: string; star
 export const MAX_WINDOW_DAYS = 14;
 export const MY_BOOKINGS_PAGE = 20;
 
-/** Warnings for a slot: anything overdue, or due before the slot ends (the seams list due-soon and overdue items). */
+/** Due items of one press from the service and inspections seams, turned into warnings for the slot. */
 async function dueWarnings(executor: Parameters<typeof loadStatuses>[0], pressId: string, slot: Slot, now: Date): Promise<string[]> {
   const [inspections, service] = await Promise.all([listInspectionDueByPress(executor, [pressId], now), listServiceDueByPress(executor, [pressId], now)]);
-  const before = (d: Date | null): boolean => d !== null && d.getTime() <= slot.endsAt.getTime();
-  return [
-    ...(inspections.get(pressId) ?? [])
-      .filter((i) => i.state === "overdue" || before(i.dueAt))
-      .map((i) => `Inspection ${i.state === "overdue" ? "overdue" : "falls due before your slot"}: ${i.name}`),
-    ...(service.get(pressId) ?? [])
-      .filter((s) => s.state === "overdue" || before(s.dueDate) || s.dueHours !== null)
-      .map((s) => `Service ${s.state === "overdue" ? "overdue" : "falls due soon"}: ${s.title}`),
-  ];
+  return slotWarnings(inspections.get(pressId) ?? [], service.get(pressId) ?? [], slot);
 }
 
 /**

@@ -6,6 +6,7 @@ import { pressStatus, type Lifecycle, type PressStatus } from "@/lib/status";
 import type { Actor } from "./actor";
 import { listInspectionDueByPress } from "./inspection-due";
 import { pressAccess, type Executor } from "./press-access";
+import { listPresses, type PressSummary } from "./presses";
 import { listServiceDueByPress } from "./service-due";
 import { listOpenTagOuts } from "./tag-outs";
 
@@ -48,4 +49,13 @@ export async function listShopStatuses(actor: Actor, shopId: string, now = new D
     .where(eq(presses.shopId, shopId))
     .orderBy(asc(presses.name));
   return loadStatuses(db, rows, now);
+}
+
+export type PressWithStatus = PressSummary & { status: PressStatus };
+
+/** The shop's presses, each with its status. Authorization: members of that shop; others get an empty list. */
+export async function listPressesWithStatus(actor: Actor, shopId: string, now = new Date()): Promise<PressWithStatus[]> {
+  const list = await listPresses(actor, shopId);
+  const statuses = await loadStatuses(db, list, now);
+  return list.map((p) => ({ ...p, status: statuses.get(p.id)! }));
 }

@@ -4,6 +4,7 @@ import { PATCH as closeRoute } from "@/app/api/problems/[problemId]/route";
 import { GET as listRoute, POST as reportRoute } from "@/app/api/presses/[pressId]/problems/route";
 import { GET as pressStatusRoute } from "@/app/api/presses/[pressId]/status/route";
 import { POST as bookRoute } from "@/app/api/presses/[pressId]/bookings/route";
+import { GET as pressListRoute } from "@/app/api/presses/route";
 import { GET as publicStatusRoute } from "@/app/api/status/[token]/route";
 import { db } from "@/db/client";
 import { emailOutbox, memberships, presses, pressTagOuts } from "@/db/schema";
@@ -104,6 +105,9 @@ describe("status page", () => {
     expect(statuses.get(building)?.code).toBe("not-in-service");
     expect(statuses.get(shop.pressId)?.code).toBe("ready");
     expect((await listShopStatuses({ userId: shop.outsider.userId }, shop.shopId)).size).toBe(0);
+    const listed = await pressListRoute(getRequest(`/api/presses?shopId=${shop.shopId}`, await cookie(shop.member)), {} as never);
+    const body = (await listed.json()) as { presses: { id: string; status: { code: string; label: string } }[] };
+    expect(body.presses.find((p) => p.id === building)?.status).toMatchObject({ code: "not-in-service", label: "Not in service" });
   });
 });
 

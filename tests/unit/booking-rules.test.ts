@@ -1,5 +1,5 @@
 import { describe, expect, it } from "vitest";
-import { checkSlot, freeStretches, outsideOpeningHours, SlotError } from "@/lib/booking-rules";
+import { checkSlot, freeStretches, outsideOpeningHours, SlotError, slotWarnings } from "@/lib/booking-rules";
 import type { OpeningHours } from "@/db/schema/shops";
 import { fromWallTime, localDate, localTime, parseLocal, startOfLocalDay, toWallTime, zoneOffsetMinutes } from "@/lib/time-zone";
 
@@ -86,5 +86,34 @@ describe("clock going back", () => {
   it("takes the earlier of two instants for a repeated wall time", () => {
     // 2026-10-25 01:30 happens twice in London (BST then GMT): the earlier is 00:30Z.
     expect(fromWallTime({ year: 2026, month: 10, day: 25, hour: 1, minute: 30 }, TZ).toISOString()).toBe("2026-10-25T00:30:00.000Z");
+  });
+});
+
+describe("slot warnings", () => {
+  const slot = { startsAt: at("2026-07-20T09:00:00Z"), endsAt: at("2026-07-20T11:00:00Z") };
+  it("warns of anything overdue and of what falls due before the slot ends, not after", () => {
+    expect(
+      slotWarnings(
+        [
+          { name: "Monthly frame check", state: "overdue", dueAt: at("2026-07-01T00:00:00Z") },
+          { name: "Hose walk-round", state: "due-soon", dueAt: at("2026-07-20T10:00:00Z") },
+          { name: "Quarterly relief test", state: "due-soon", dueAt: at("2026-07-25T00:00:00Z") },
+        ],
+        [
+          { title: "Oil sample", state: "overdue", dueDate: null, dueHours: 400 },
+          { title: "Filter element", state: "due-soon", dueDate: at("2026-07-19T00:00:00Z"), dueHours: null },
+          { title: "Oil change", state: "due-soon", dueDate: at("2026-08-19T00:00:00Z"), dueHours: null },
+          { title: "Pump coupling check", state: "due-soon", dueDate: null, dueHours: 520 },
+        ],
+        slot,
+      ),
+    ).toEqual([
+      "Inspection overdue: Monthly frame check.",
+      "Inspection falls due before your slot ends: Hose walk-round.",
+      "Service overdue: Oil sample.",
+      "Service falls due before your slot ends: Filter element.",
+      "Service due soon, at 520 h on the meter: Pump coupling check.",
+    ]);
+    expect(slotWarnings([], [], slot)).toEqual([]);
   });
 });
