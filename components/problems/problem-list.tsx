@@ -1,8 +1,22 @@
+import Image from "next/image";
 import { closeProblemAction } from "@/app/(app)/presses/[pressId]/problem-actions";
 import type { ProblemView } from "@/lib/data/problems";
 import { SEVERITY_LABELS } from "@/lib/problem-labels";
 import { localDate, localTime } from "@/lib/time-zone";
 import { CloseProblemForm } from "./close-problem-form";
+
+function ProblemPhotos({ problem }: { problem: ProblemView }) {
+  if (problem.photos.length === 0) return null;
+  return (
+    <ul className="mt-2 flex flex-wrap gap-2">
+      {problem.photos.map((photo) => (
+        <li key={photo.id}>
+          <Image src={photo.thumbUrl} alt={photo.caption ?? "Photo of the problem"} width={photo.thumbWidth} height={photo.thumbHeight} sizes="96px" className="h-20 w-24 rounded object-cover ring-1 ring-steel-200" />
+        </li>
+      ))}
+    </ul>
+  );
+}
 
 const when = (d: Date, zone: string): string => `${localDate(d, zone)} ${localTime(d, zone)}`;
 
@@ -20,6 +34,7 @@ export function ProblemList({ pressId, problems, canClose, timeZone }: { pressId
               {p.reporterName ? ` · ${p.reporterName}` : ""}
             </p>
             <p className="mt-1 text-sm whitespace-pre-line">{p.description}</p>
+            <ProblemPhotos problem={p} />
             {canClose ? <CloseProblemForm problemId={p.id} action={closeProblemAction.bind(null, pressId, p.id)} /> : null}
           </li>
         ))}

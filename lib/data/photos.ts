@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, photos, users } from "@/db/schema";
+import { components, photos, problemReports, users } from "@/db/schema";
 import { canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import type { PhotoKind } from "@/lib/photos/kinds";
 import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
@@ -29,7 +29,7 @@ export type PhotoView = {
 };
 
 /** The record a photo is attached to, after the server checked it. */
-export type PhotoTarget = { pressId: string; componentId: string | null };
+export type PhotoTarget = { pressId: string; componentId: string | null; problemReportId?: string | null };
 export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
 export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
 
@@ -67,7 +67,7 @@ function selectViews() {
  */
 export async function authorizePhotoTarget(
   actor: Actor,
-  target: { pressId: string; componentId?: string | null },
+  target: { pressId: string; componentId?: string | null; problemReportId?: string | null },
   executor: Executor = db,
 ): Promise<PhotoTarget> {
   const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
@@ -81,7 +81,16 @@ export async function authorizePhotoTarget(
       .limit(1);
     if (!part) throw new NotFoundError("Part not found on this press");
   }
-  return { pressId: target.pressId, componentId };
+  const problemReportId = target.problemReportId ?? null;
+  if (problemReportId) {
+    const [report] = await executor
+      .select({ id: problemReports.id })
+      .from(problemReports)
+      .where(and(eq(problemReports.id, problemReportId), eq(problemReports.pressId, target.pressId)))
+      .limit(1);
+    if (!report) throw new NotFoundError("Problem report not found on this press");
+  }
+  return { pressId: target.pressId, componentId, problemReportId };
 }
 
 /**
@@ -95,6 +104,7 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
       id: photo.id,
       pressId: target.pressId,
       componentId: target.componentId,
+      problemReportId: target.problemReportId ?? null,
       kind: photo.kind,
       caption: photo.caption,
       uploadedBy: actor.userId,

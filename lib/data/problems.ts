@@ -1,7 +1,7 @@
 import "server-only";
-import { and, desc, eq, isNotNull, isNull } from "drizzle-orm";
+import { and, desc, eq, inArray, isNotNull, isNull } from "drizzle-orm";
 import { db } from "@/db/client";
-import { memberships, presses, problemReports, shops, users, type ProblemSeverity } from "@/db/schema";
+import { memberships, photos, presses, problemReports, shops, users, type ProblemSeverity } from "@/db/schema";
 import { assertCan, NotFoundError } from "@/lib/auth/permissions";
 import { appUrl } from "@/lib/app-url";
 import { enqueueEmail } from "@/lib/email/outbox";
@@ -26,11 +26,13 @@ export type ProblemView = {
   closedAt: Date | null;
   closeReason: string | null;
   serviceEntryId: string | null;
+  photos: { id: string; thumbUrl: string; thumbWidth: number; thumbHeight: number; caption: string | null }[];
 };
 
 /** How many closed reports a press page shows; open ones are few by nature but capped too. */
 const CLOSED_SHOWN = 10;
 const OPEN_CAP = 50;
+const PHOTOS_SHOWN = 4;
 
 /**
  * Reports a problem on a press. Authorization: members of its shop (`reportProblem`). With
@@ -102,7 +104,18 @@ export async function listProblems(actor: Actor, pressId: string): Promise<{ ope
       .orderBy(desc(closed ? problemReports.closedAt : problemReports.reportedAt))
       .limit(closed ? CLOSED_SHOWN : OPEN_CAP);
   const [open, closed] = await Promise.all([base(false), base(true)]);
-  return { open, closed };
+  // The reports' photos in one query, at most a few each.
+  const ids = [...open, ...closed].map((p) => p.id);
+  const shots = ids.length
+    ? await db
+        .select({ id: photos.id, problemReportId: photos.problemReportId, thumbUrl: photos.thumbUrl, thumbWidth: photos.thumbWidth, thumbHeight: photos.thumbHeight, caption: photos.caption })
+        .from(photos)
+        .where(and(eq(photos.pressId, pressId), inArray(photos.problemReportId, ids)))
+        .orderBy(desc(photos.createdAt))
+        .limit(PHOTOS_SHOWN * ids.length)
+    : [];
+  const withPhotos = (p: Omit<ProblemView, "photos">): ProblemView => ({ ...p, photos: shots.filter((s) => s.problemReportId === p.id).slice(0, PHOTOS_SHOWN) });
+  return { open: open.map(withPhotos), closed: closed.map(withPhotos) };
 }
 
 /**

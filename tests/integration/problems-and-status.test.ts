@@ -14,6 +14,8 @@ import { listShopStatuses } from "@/lib/data/press-status";
 import { getStatusToken, regenerateStatusToken } from "@/lib/data/status-page";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { newId } from "@/lib/ids";
+import { authorizePhotoTarget, createPhotoRecord } from "@/lib/data/photos";
+import { listProblems } from "@/lib/data/problems";
 import { getRequest, jsonRequest } from "./helpers";
 import { cookie, futureSlot, makeSharedShop, params } from "./shop-context";
 
@@ -67,6 +69,21 @@ describe("problem reports", () => {
     };
     expect(list.open).toHaveLength(1);
     expect(list.closed[0]).toMatchObject({ id, serviceEntryId });
+  });
+
+  it("takes photos: a report of this press only, listed with the report", async () => {
+    const { id } = (await (await report(shop.member, { description: "Weld crack at the left gusset", severity: "medium" })).json()) as { id: string };
+    const actor = { userId: shop.member.userId };
+    await expect(authorizePhotoTarget(actor, { pressId: shop.pressId, problemReportId: id })).resolves.toMatchObject({ problemReportId: id });
+    const otherPress = newId();
+    await db.insert(presses).values({ id: otherPress, shopId: shop.shopId, name: "Other press", frameType: "c-frame", lifecycle: "in-service" });
+    await expect(authorizePhotoTarget(actor, { pressId: otherPress, problemReportId: id })).rejects.toBeInstanceOf(NotFoundError);
+    await expect(authorizePhotoTarget({ userId: shop.outsider.userId }, { pressId: shop.pressId, problemReportId: id })).rejects.toBeInstanceOf(NotFoundError);
+
+    const file = { key: `k-${newId()}`, url: "http://localhost:4010/f/x", width: 800, height: 600, bytes: 1000 };
+    await createPhotoRecord(actor, { pressId: shop.pressId, componentId: null, problemReportId: id }, { id: newId(), kind: "damage", caption: "Crack", full: file, thumb: { ...file, key: `t-${newId()}` } });
+    const listed = await listProblems(actor, shop.pressId);
+    expect(listed.open.find((p) => p.id === id)?.photos.map((p) => p.caption)).toEqual(["Crack"]);
   });
 
   it("refuses unknown keys and foreign presses", async () => {

@@ -175,7 +175,7 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           <Card title={`Problem reports (${problems.open.length} open)`}>
             <div className="grid gap-6 lg:grid-cols-2 [&>*]:min-w-0">
               <ProblemList pressId={pressId} problems={problems} canClose={can(press.role, "closeProblem")} timeZone={timeZone} />
-              {press.lifecycle !== "retired" ? <ProblemForm action={reportProblemAction.bind(null, pressId)} /> : null}
+              {press.lifecycle !== "retired" ? <ProblemForm pressId={pressId} action={reportProblemAction.bind(null, pressId)} /> : null}
             </div>
           </Card>
         </div>

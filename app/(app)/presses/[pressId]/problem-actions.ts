@@ -16,13 +16,16 @@ export async function reportProblemAction(pressId: string, _prev: ActionState, f
   const values = echoValues(form);
   const parsed = problemInputSchema.safeParse({ description: values.description ?? "", severity: values.severity, stopUse: values.stopUse === "on" });
   if (!parsed.success) return { ok: false, message: "Please fix the marked fields.", fieldErrors: z.flattenError(parsed.error).fieldErrors, values };
+  let id: string;
   try {
-    await reportProblem({ userId: user.id }, pressId, parsed.data);
+    ({ id } = await reportProblem({ userId: user.id }, pressId, parsed.data));
   } catch (error) {
     return refusalState(error, values);
   }
   revalidatePath("/", "layout");
-  return { ok: true, message: parsed.data.stopUse ? "Reported. The press is tagged out and the managers have been told." : "Reported. Thank you." };
+  // The new report's id lets the form offer a photo upload for it.
+  const message = parsed.data.stopUse ? "Reported. The press is tagged out and the managers have been told." : "Reported. Thank you.";
+  return { ok: true, message, values: { problemId: id } };
 }
 
 /** Closes a report with a service-log entry id or a reason; clears its tag-out. Managers and inspectors. */

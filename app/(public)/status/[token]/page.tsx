@@ -34,7 +34,7 @@ export default async function StatusPage({ params }: { params: Promise<{ token: 
       ) : null}
       {member && member.lifecycle !== "retired" ? (
         <Card title="Report a problem">
-          <ProblemForm action={reportProblemAction.bind(null, pressId)} />
+          <ProblemForm pressId={pressId} action={reportProblemAction.bind(null, pressId)} />
         </Card>
       ) : null}
       {!session ? <p className="text-sm text-steel-600">Members of this shop can sign in to book the press or report a problem.</p> : null}

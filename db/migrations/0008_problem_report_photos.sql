@@ -1,0 +1,1 @@
+ALTER TABLE `photos` ADD CONSTRAINT `photos_problem_report_id_problem_reports_id_fk` FOREIGN KEY (`problem_report_id`) REFERENCES `problem_reports`(`id`) ON DELETE set null ON UPDATE no action;
