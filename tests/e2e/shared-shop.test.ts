@@ -71,6 +71,10 @@ describe("shared shop: status page, booking, stop-use report", () => {
     await problem.getByLabel(/Stop use/).check();
     await problem.getByRole("button", { name: "Report problem" }).click();
     await expect(problem.getByRole("status").textContent()).resolves.toContain("tagged out");
+    // A photo may follow, attached to the new report.
+    await owen.page.getByRole("heading", { name: "Add a photo of it (optional)" }).waitFor();
+    await expect(owen.page.locator("[data-status]").first().getAttribute("data-status")).resolves.toBe("tagged-out");
+    await screenshot(owen.page, "shared-shop-problem-reported-phone");
     await owen.context.close();
 
     await tess.page.reload();

@@ -3,6 +3,7 @@ import { BookingForm } from "@/components/booking/booking-form";
 import { ProblemForm } from "@/components/problems/problem-form";
 import { LiveStatus } from "@/components/status/live-status";
 import { Card } from "@/components/ui/card";
+import { FreshSWR } from "@/components/ui/fresh-swr";
 import { getCurrentSession, orPageError } from "@/lib/auth/current";
 import { can } from "@/lib/auth/permissions";
 import { getPress } from "@/lib/data/presses";
@@ -25,7 +26,10 @@ export default async function StatusPage({ params }: { params: Promise<{ token: 
     <div className="mx-auto flex max-w-2xl flex-col gap-4 px-4 py-6">
       <h1 className="text-2xl font-semibold tracking-tight">{status.pressName}</h1>
       <Card>
-        <LiveStatus token={token} initial={status} />
+        {/* Keyed by the render time: after a report on this page, the fresh server data replaces SWR's older copy. */}
+        <FreshSWR key={status.checkedAt}>
+          <LiveStatus token={token} initial={status} />
+        </FreshSWR>
       </Card>
       {member && status.status.usable && can(member.role, "bookPress") ? (
         <Card title="Book this press">
