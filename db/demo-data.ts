@@ -127,3 +127,15 @@ export const BUILDER_PRESSES: DemoPress[] = [
 export function ratedForceKn(boreMm: number, reliefBar: number, cylinders = 1): number {
   return cylinders * ((Math.PI * boreMm ** 2) / 4) * (reliefBar / 10) / 1000;
 }
+
+/**
+ * Demo bookings of the workshop's presses, relative to the day the seed runs (in the workshop's
+ * zone): [press name, member key, days from today, start hour, hours long]. Invented scenario.
+ */
+export const DEMO_BOOKINGS: [string, keyof typeof WORKSHOP.roles, number, number, number][] = [
+  ["Bay 1 H-frame", "member1", 1, 10, 2],
+  ["Bay 1 H-frame", "member2", 1, 14, 3],
+  ["Bay 1 H-frame", "member1", 3, 18, 2],
+  ["Bench C-frame", "member2", 2, 9, 1],
+  ["Bench C-frame", "inspector", 4, 16, 2],
+];

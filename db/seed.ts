@@ -13,7 +13,9 @@ import { migrationDatabaseUrl } from "./config";
 import { addLocalDays, localDate } from "../lib/schedule";
 import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
 import { DEMO_SERVICE } from "./demo-service";
-import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
+import { fromWallTime, startOfLocalDay, toWallTime } from "../lib/time-zone";
+import { BUILDER_PRESSES, DEMO_BOOKINGS, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
+import { bookings } from "./schema/bookings";
 import * as schema from "./schema";
 
 function pressRow(shopId: string, p: DemoPress): typeof schema.presses.$inferInsert {
@@ -39,7 +41,7 @@ async function insertService(tx: Tx, pressId: string, p: DemoPress, people: { ma
 }
 
 /** A demo press with its parts and hour-meter log. */
-async function insertPress(tx: Tx, shopId: string, p: DemoPress, service?: { people: { manager: string; inspector: string }; timeZone: string }): Promise<void> {
+async function insertPress(tx: Tx, shopId: string, p: DemoPress, service?: { people: { manager: string; inspector: string }; timeZone: string }): Promise<string> {
   const row = pressRow(shopId, p);
   await tx.insert(schema.presses).values(row);
   const parts = DEMO_PARTS[p.name] ?? [];
@@ -55,6 +57,17 @@ async function insertPress(tx: Tx, shopId: string, p: DemoPress, service?: { peo
     );
   }
   if (service) await insertService(tx, row.id!, p, service.people, service.timeZone);
+  return row.id!;
+}
+
+/** The demo bookings, on whole hours in the workshop's zone from the day the seed runs. */
+function demoBookings(pressIds: Map<string, string>, userIds: Record<string, string>): (typeof bookings.$inferInsert)[] {
+  return DEMO_BOOKINGS.map(([press, who, days, hour, length]) => {
+    const day = startOfLocalDay(new Date(), WORKSHOP.timeZone, days);
+    const w = toWallTime(day, WORKSHOP.timeZone);
+    const startsAt = fromWallTime({ year: w.year, month: w.month, day: w.day, hour, minute: 0 }, WORKSHOP.timeZone);
+    return { id: newId(), pressId: pressIds.get(press)!, userId: userIds[who]!, startsAt, endsAt: new Date(startsAt.getTime() + length * 3_600_000) };
+  });
 }
 
 export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
@@ -81,7 +94,9 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
         await tx.insert(schema.memberships).values({ shopId: workshopId, userId: ids[key]!, role });
       }
       const people = { manager: ids.manager!, inspector: ids.inspector! };
-      for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p, { people, timeZone: WORKSHOP.timeZone });
+      const pressIds = new Map<string, string>();
+      for (const p of WORKSHOP_PRESSES) pressIds.set(p.name, await insertPress(tx, workshopId, p, { people, timeZone: WORKSHOP.timeZone }));
+      await tx.insert(bookings).values(demoBookings(pressIds, ids));
     });
     return true;
   } finally {

@@ -1,6 +1,6 @@
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { z } from "zod";
-import { ConflictError } from "@/lib/errors";
+import { ConflictError, FieldError, LockedError } from "@/lib/errors";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 import type { ActionState } from "./action-state";
 
@@ -10,7 +10,8 @@ import type { ActionState } from "./action-state";
  */
 export function refusalState(error: unknown, values: Record<string, string>, forbiddenMessage = "Your role in this shop does not allow this change."): ActionState {
   if (error instanceof ForbiddenError) return { ok: false, message: forbiddenMessage, values };
-  if (error instanceof ConflictError || error instanceof NotFoundError) return { ok: false, message: error.message, values };
+  if (error instanceof ConflictError || error instanceof NotFoundError || error instanceof LockedError) return { ok: false, message: error.message, values };
+  if (error instanceof FieldError) return { ok: false, message: error.message, fieldErrors: { [error.field]: [error.message] }, values };
   // The data layer re-checks input against what is stored (e.g. a part's spec against its stored
   // kind, not the kind a form claimed): a mismatch is the form's problem, never a 500.
   if (error instanceof z.ZodError) {

@@ -32,3 +32,30 @@ export class ConflictError extends Error {
     this.name = "ConflictError";
   }
 }
+
+/** Input that is well-formed but breaks a rule of one field (answered 400 with that field's message). */
+export class FieldError extends Error {
+  constructor(
+    public readonly field: string,
+    message: string,
+  ) {
+    super(message);
+    this.name = "FieldError";
+  }
+}
+
+/** The record may not be used right now — e.g. booking a tagged-out press (answered 423 with the reason). */
+export class LockedError extends Error {
+  constructor(message: string) {
+    super(message);
+    this.name = "LockedError";
+  }
+}
+
+/** The database kept timing out on locks after our retries (answered 503; the client may try again). */
+export class BusyError extends Error {
+  constructor() {
+    super("The shop's records are busy right now. Please try again in a moment.");
+    this.name = "BusyError";
+  }
+}

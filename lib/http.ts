@@ -5,7 +5,7 @@ import { isSameOriginRequest } from "@/lib/auth/csrf";
 import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
-import { ConflictError, DATABASE_UNAVAILABLE_MESSAGE, isDatabaseUnavailable } from "@/lib/errors";
+import { BusyError, ConflictError, DATABASE_UNAVAILABLE_MESSAGE, FieldError, isDatabaseUnavailable, LockedError } from "@/lib/errors";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 /** Largest JSON body any route reads: the biggest real one (a full sizing input) is about 1 kB. */
@@ -115,6 +115,9 @@ export function errorResponse(error: unknown): NextResponse {
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
   if (error instanceof ConflictError) return jsonError(409, error.message);
+  if (error instanceof LockedError) return jsonError(423, error.message);
+  if (error instanceof FieldError) return jsonError(400, error.message, { fieldErrors: { [error.field]: [error.message] } });
+  if (error instanceof BusyError) return jsonError(503, error.message, undefined, { headers: { "Retry-After": "2" } });
   if (error instanceof z.ZodError) {
     return jsonError(400, "Invalid request.", { fieldErrors: fieldErrorsOf(error.issues, BODY_FIELD) });
   }

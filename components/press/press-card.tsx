@@ -2,9 +2,11 @@ import Link from "next/link";
 import type { PressSummary } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import { showQuantity as show } from "@/components/ui/quantity";
+import type { PressStatus } from "@/lib/status";
 import type { UnitSystem } from "@/lib/units";
+import { StatusBadge } from "@/components/ui/status-badge";
 
-export function PressCard({ press, units }: { press: PressSummary; units: UnitSystem }) {
+export function PressCard({ press, units, status }: { press: PressSummary; units: UnitSystem; status: PressStatus | undefined }) {
   return (
     <Link
       href={`/presses/${press.id}`}
@@ -25,7 +27,12 @@ export function PressCard({ press, units }: { press: PressSummary; units: UnitSy
         <Figure label="Stroke" value={show("length", press.strokeMm, units)} />
         <Figure label="Relief" value={show("pressure", press.reliefPressureBar, units)} />
       </dl>
-      <p className="mt-3 text-xs text-steel-500">Status shows here once inspections and service plans are recorded.</p>
+      {status ? (
+        <div className="mt-3" data-testid="press-card-status">
+          <StatusBadge status={status} />
+          {status.reasons[0] ? <p className="mt-1 line-clamp-2 text-xs text-steel-700">{status.reasons.join(" ")}</p> : null}
+        </div>
+      ) : null}
     </Link>
   );
 }

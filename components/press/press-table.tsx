@@ -13,16 +13,18 @@ import { useMemo, useState } from "react";
 import useSWR from "swr";
 import { DataTable } from "@/components/ui/data-table";
 import { showQuantity } from "@/components/ui/quantity";
-import type { PressSummary } from "@/lib/data/presses";
+import { StatusBadge } from "@/components/ui/status-badge";
+import type { PressWithStatus } from "@/lib/data/press-status";
+import { STATUS_CODES } from "@/lib/status";
 import { fetchJson } from "@/lib/fetch-json";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import type { UnitSystem } from "@/lib/units";
 
-const col = createColumnHelper<PressSummary>();
+const col = createColumnHelper<PressWithStatus>();
 
 /** Sortable, filterable list of the shop's presses, kept fresh from /api/presses. */
-export function PressTable({ initial, units }: { initial: PressSummary[]; units: UnitSystem }) {
-  const { data, error } = useSWR<{ presses: PressSummary[] }>("/api/presses", fetchJson, { fallbackData: { presses: initial } });
+export function PressTable({ initial, units }: { initial: PressWithStatus[]; units: UnitSystem }) {
+  const { data, error } = useSWR<{ presses: PressWithStatus[] }>("/api/presses", fetchJson, { fallbackData: { presses: initial } });
   const [sorting, setSorting] = useState<SortingState>([{ id: "name", desc: false }]);
   const [query, setQuery] = useState("");
   const [lifecycle, setLifecycle] = useState("active");
@@ -35,6 +37,13 @@ export function PressTable({ initial, units }: { initial: PressSummary[]; units:
   const columns = useMemo(
     () => [
       col.accessor("name", { header: "Name", cell: (c) => <Link href={`/presses/${c.row.original.id}`} className="font-semibold text-ink underline decoration-steel-300 underline-offset-2">{c.getValue()}</Link> }),
+      col.accessor((p) => p.status.code, {
+        id: "status",
+        header: "Status",
+        cell: (c) => <StatusBadge status={c.row.original.status} />,
+        // Most serious first when sorted ascending.
+        sortingFn: (a, b) => STATUS_CODES.indexOf(a.original.status.code) - STATUS_CODES.indexOf(b.original.status.code),
+      }),
       col.accessor("frameType", { header: "Frame", cell: (c) => FRAME_TYPE_LABELS[c.getValue()] }),
       col.accessor("lifecycle", { header: "Lifecycle", cell: (c) => LIFECYCLE_LABELS[c.getValue()] }),
       col.accessor("ratedForceKn", { header: "Rated", cell: (c) => showQuantity("force", c.getValue(), units), sortUndefined: "last" }),

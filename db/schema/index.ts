@@ -9,3 +9,4 @@ export * from "./outbox";
 export * from "./tag-outs";
 export * from "./service";
 export * from "./invitations";
+export * from "./problems";

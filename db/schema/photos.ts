@@ -5,6 +5,7 @@ import { ID_LENGTH, utc } from "./columns";
 import { components } from "./components";
 import { presses } from "./presses";
 import { serviceEntries } from "./service";
+import { problemReports } from "./problems";
 
 export const PHOTO_KINDS = ["weld", "leak", "damage", "die", "other"] as const;
 
@@ -24,7 +25,7 @@ export const photos = mysqlTable(
     componentId: varchar("component_id", { length: ID_LENGTH }).references(() => components.id, { onDelete: "set null" }),
     serviceEntryId: varchar("service_entry_id", { length: ID_LENGTH }).references(() => serviceEntries.id, { onDelete: "set null" }),
     inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }),
-    problemReportId: varchar("problem_report_id", { length: ID_LENGTH }),
+    problemReportId: varchar("problem_report_id", { length: ID_LENGTH }).references(() => problemReports.id, { onDelete: "set null" }),
     kind: mysqlEnum("kind", PHOTO_KINDS).notNull().default("other"),
     caption: varchar("caption", { length: 200 }),
     uploadedBy: varchar("uploaded_by", { length: ID_LENGTH }).references(() => users.id, { onDelete: "set null" }),

@@ -1,5 +1,5 @@
 import { sql } from "drizzle-orm";
-import { double, index, mysqlEnum, mysqlTable, text, varchar } from "drizzle-orm/mysql-core";
+import { double, index, mysqlEnum, mysqlTable, text, uniqueIndex, varchar } from "drizzle-orm/mysql-core";
 import type { SizingInput } from "@/lib/hydraulics/types";
 import { ID_LENGTH, jsonColumn, utc } from "./columns";
 import { shops } from "./shops";
@@ -30,8 +30,10 @@ export const presses = mysqlTable(
     notes: text("notes"),
     /** The sizing inputs a planned press was saved from (SI), kept so the plan can be reopened. */
     sizingInput: jsonColumn<SizingInput>("sizing_input"),
+    /** Random token of the public status page (/status/{token}); made on first use, a manager may replace it. */
+    statusToken: varchar("status_token", { length: ID_LENGTH }),
     createdAt: utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
     updatedAt: utc("updated_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
   },
-  (t) => [index("presses_shop_idx").on(t.shopId)],
+  (t) => [index("presses_shop_idx").on(t.shopId), uniqueIndex("presses_status_token").on(t.statusToken)],
 );

@@ -1,7 +1,13 @@
 import { sql } from "drizzle-orm";
 import { boolean, index, mysqlEnum, mysqlTable, primaryKey, varchar } from "drizzle-orm/mysql-core";
 import { users } from "./auth";
-import { ID_LENGTH, utc } from "./columns";
+import { ID_LENGTH, jsonColumn, utc } from "./columns";
+
+/**
+ * Opening hours per weekday, Monday first (index 0 = Monday … 6 = Sunday), as minutes after
+ * midnight in the shop's time zone; null for a closed day.
+ */
+export type OpeningHours = ({ opens: number; closes: number } | null)[];
 
 export const ROLES = ["manager", "inspector", "member"] as const;
 
@@ -14,6 +20,8 @@ export const shops = mysqlTable("shops", {
   currency: varchar("currency", { length: 3 }).notNull().default("USD"),
   /** Created at sign-up for a home builder; never offered for deletion. */
   personal: boolean("personal").notNull().default(false),
+  /** When set, bookings must fall inside these hours; null means any time. */
+  openingHours: jsonColumn<OpeningHours>("opening_hours"),
   createdAt: utc("created_at").notNull().default(sql`CURRENT_TIMESTAMP(3)`),
 });
 

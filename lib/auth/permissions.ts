@@ -28,6 +28,10 @@ export const ACTIONS = {
   tagOutPress: ["manager", "inspector"],
   clearTagOut: ["manager", "inspector"],
   bookPress: ["manager", "inspector", "member"],
+  /** Cancel someone else's booking (everyone who may book may cancel their own). */
+  cancelAnyBooking: ["manager"],
+  /** Replace a press's status-page link, so a printed QR card stops working. */
+  regenerateStatusLink: ["manager"],
   reportProblem: ["manager", "inspector", "member"],
   closeProblem: ["manager", "inspector"],
   attachPhoto: ["manager", "inspector", "member"],

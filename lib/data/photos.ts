@@ -1,7 +1,7 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, memberships, photos, presses, serviceEntries, users } from "@/db/schema";
+import { components, memberships, photos, presses, problemReports, serviceEntries, users } from "@/db/schema";
 import { assertCan, canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { photoFileUrl, type PhotoVariant } from "@/lib/photos/file-urls";
 import type { PhotoKind } from "@/lib/photos/kinds";
@@ -30,7 +30,7 @@ export type PhotoView = {
 };
 
 /** The record a photo is attached to, after the server checked it. */
-export type PhotoTarget = { pressId: string; componentId: string | null; serviceEntryId?: string | null };
+export type PhotoTarget = { pressId: string; componentId: string | null; serviceEntryId?: string | null; problemReportId?: string | null };
 export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
 export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
 
@@ -66,7 +66,7 @@ function selectViews() {
  */
 export async function authorizePhotoTarget(
   actor: Actor,
-  target: { pressId: string; componentId?: string | null; serviceEntryId?: string | null },
+  target: { pressId: string; componentId?: string | null; serviceEntryId?: string | null; problemReportId?: string | null },
   executor: Executor = db,
 ): Promise<PhotoTarget> {
   const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
@@ -89,7 +89,16 @@ export async function authorizePhotoTarget(
       .limit(1);
     if (!entry) throw new NotFoundError("Service entry not found on this press");
   }
-  return { pressId: target.pressId, componentId, serviceEntryId };
+  const problemReportId = target.problemReportId ?? null;
+  if (problemReportId) {
+    const [report] = await executor
+      .select({ id: problemReports.id })
+      .from(problemReports)
+      .where(and(eq(problemReports.id, problemReportId), eq(problemReports.pressId, target.pressId)))
+      .limit(1);
+    if (!report) throw new NotFoundError("Problem report not found on this press");
+  }
+  return { pressId: target.pressId, componentId, serviceEntryId, problemReportId };
 }
 
 /**
@@ -104,6 +113,7 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
       pressId: target.pressId,
       componentId: target.componentId,
       serviceEntryId: target.serviceEntryId ?? null,
+      problemReportId: target.problemReportId ?? null,
       kind: photo.kind,
       caption: photo.caption,
       uploadedBy: actor.userId,

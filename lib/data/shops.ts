@@ -1,7 +1,8 @@
 import "server-only";
-import { and, asc, eq, sql } from "drizzle-orm";
+import { and, asc, eq, gt, inArray, sql } from "drizzle-orm";
 import { db } from "@/db/client";
-import { memberships, shops, users } from "@/db/schema";
+import { memberships, presses, shops, users, type OpeningHours } from "@/db/schema";
+import { bookings } from "@/db/schema/bookings";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import type { Actor } from "./actor";
 
@@ -107,5 +108,40 @@ export async function changeMemberRole(actor: Actor, shopId: string, userId: str
       .update(memberships)
       .set({ role: newRole })
       .where(and(eq(memberships.shopId, shopId), eq(memberships.userId, userId)));
+  });
+}
+
+/** Sets or clears (null) the hours bookings must fall in. Authorization: managers of that shop. */
+export async function updateOpeningHours(actor: Actor, shopId: string, hours: OpeningHours | null): Promise<void> {
+  const role = await roleIn(actor, shopId);
+  if (!role) throw new NotFoundError("Shop not found");
+  assertCan(role, "editShop");
+  await db.update(shops).set({ openingHours: hours }).where(eq(shops.id, shopId));
+}
+
+/** The shop's opening hours (null: any time). Authorization: members of that shop. */
+export async function getOpeningHours(actor: Actor, shopId: string): Promise<OpeningHours | null> {
+  const role = await roleIn(actor, shopId);
+  if (!role) throw new NotFoundError("Shop not found");
+  const [row] = await db.select({ hours: shops.openingHours }).from(shops).where(eq(shops.id, shopId));
+  return row?.hours ?? null;
+}
+
+/**
+ * Removes a member from a shop, with their bookings there that have not ended. Authorization:
+ * managers of that shop. The last manager cannot be removed (nor remove themselves).
+ */
+export async function removeMember(actor: Actor, shopId: string, userId: string, now = new Date()): Promise<void> {
+  const role = await roleIn(actor, shopId);
+  if (!role) throw new NotFoundError("Shop not found");
+  assertCan(role, "manageMembers");
+  await db.transaction(async (tx) => {
+    const rows = await tx.select({ userId: memberships.userId, role: memberships.role }).from(memberships).where(eq(memberships.shopId, shopId)).for("update");
+    const target = rows.find((r) => r.userId === userId);
+    if (!target) throw new NotFoundError("Member not found");
+    if (target.role === "manager" && rows.filter((r) => r.role === "manager").length <= 1) throw new LastManagerError();
+    const shopPresses = tx.select({ id: presses.id }).from(presses).where(eq(presses.shopId, shopId));
+    await tx.delete(bookings).where(and(eq(bookings.userId, userId), gt(bookings.endsAt, now), inArray(bookings.pressId, shopPresses)));
+    await tx.delete(memberships).where(and(eq(memberships.shopId, shopId), eq(memberships.userId, userId)));
   });
 }

@@ -49,10 +49,11 @@ export async function createUserWithPersonalShop(input: {
   return { userId, shopId };
 }
 
-export function isDuplicateKey(error: unknown): boolean {
+/** MariaDB's duplicate-key error (on the named key, when given), wherever it sits in the cause chain. */
+export function isDuplicateKey(error: unknown, key?: string): boolean {
   let e: unknown = error;
   for (let depth = 0; e && depth < 4; depth++) {
-    if ((e as { code?: string }).code === "ER_DUP_ENTRY") return true;
+    if ((e as { code?: string }).code === "ER_DUP_ENTRY") return !key || String((e as { message?: unknown }).message).includes(key);
     e = (e as { cause?: unknown }).cause;
   }
   return false;

@@ -64,8 +64,12 @@ export async function storeUploadedPhoto(
     if (!full || !thumb) throw new StorageUnavailableError("store the photo");
     await deleteStoredFiles([original.key]);
     toDelete.delete(original.key);
-    const { userId, pressId, componentId, serviceEntryId, kind, caption } = metadata;
-    await createPhotoRecord({ userId }, { pressId, componentId, serviceEntryId }, { id, kind, caption, full: stored(full, processed.full), thumb: stored(thumb, processed.thumb) });
+    const { userId, pressId, componentId, serviceEntryId, problemReportId, kind, caption } = metadata;
+    await createPhotoRecord(
+      { userId },
+      { pressId, componentId, serviceEntryId, problemReportId },
+      { id, kind, caption, full: stored(full, processed.full), thumb: stored(thumb, processed.thumb) },
+    );
     return { photoId: id };
   } catch (error) {
     await deleteStoredFilesQuietly([...toDelete]);

@@ -19,6 +19,7 @@ export const photoUploadInputSchema = z.strictObject({
   pressId: recordId("press"),
   componentId: recordId("part").optional(),
   serviceEntryId: recordId("service entry").optional(),
+  problemReportId: recordId("problem report").optional(),
   kind: photoKindSchema,
   caption: captionSchema.optional(),
 });

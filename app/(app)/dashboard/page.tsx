@@ -6,6 +6,7 @@ import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
+import { listShopStatuses } from "@/lib/data/press-status";
 import { listPresses } from "@/lib/data/presses";
 import { listDueForActor } from "@/lib/data/service-due";
 import { LIFECYCLE_LABELS } from "@/lib/press-labels";
@@ -14,7 +15,12 @@ export const metadata: Metadata = { title: "Dashboard" };
 
 export default async function DashboardPage() {
   const { user, shop } = await requireShopContext();
-  const [presses, due] = await Promise.all([listPresses({ userId: user.id }, shop.id), listDueForActor({ userId: user.id }, { shopId: shop.id })]);
+  const actor = { userId: user.id };
+  const [presses, due, statuses] = await Promise.all([
+    listPresses(actor, shop.id),
+    listDueForActor(actor, { shopId: shop.id }),
+    listShopStatuses(actor, shop.id),
+  ]);
   const dueRows: DueRow[] = due.map((d) => ({ key: `${d.kind}:${d.taskId}`, kind: d.kind, title: d.title, pressName: d.pressName, href: `/presses/${d.pressId}#service`, state: d.state, dueDate: d.dueDate, dueHours: d.dueHours }));
   const byLifecycle = Object.entries(LIFECYCLE_LABELS).map(([key, label]) => ({
     label,
@@ -50,7 +56,7 @@ export default async function DashboardPage() {
           ) : (
             <div className="grid gap-3 sm:grid-cols-2">
               {presses.map((press) => (
-                <PressCard key={press.id} press={press} units={user.unitSystem} />
+                <PressCard key={press.id} press={press} units={user.unitSystem} status={statuses.get(press.id)} />
               ))}
             </div>
           )}

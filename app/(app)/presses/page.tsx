@@ -6,13 +6,13 @@ import { buttonClass } from "@/components/ui/button";
 import { PageTitle } from "@/components/ui/card";
 import { requireShopContext } from "@/lib/auth/current";
 import { canEditPress } from "@/lib/auth/permissions";
-import { listPresses } from "@/lib/data/presses";
+import { listPressesWithStatus } from "@/lib/data/press-status";
 
 export const metadata: Metadata = { title: "Presses" };
 
 export default async function PressesPage() {
   const { user, shop } = await requireShopContext();
-  const presses = await listPresses({ userId: user.id }, shop.id);
+  const presses = await listPressesWithStatus({ userId: user.id }, shop.id);
   return (
     <>
       <PageTitle

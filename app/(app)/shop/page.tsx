@@ -6,13 +6,15 @@ import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
 import { can, canEditShop } from "@/lib/auth/permissions";
 import { ShopInvitations } from "@/components/shop/invitations";
-import { listMembers } from "@/lib/data/shops";
+import { getOpeningHours, listMembers } from "@/lib/data/shops";
+import { formatMinutes } from "@/lib/booking-rules";
+import { WEEKDAY_NAMES } from "@/lib/validation/shop";
 
 export const metadata: Metadata = { title: "Shop" };
 
 export default async function ShopPage() {
   const { user, shop } = await requireShopContext();
-  const members = await listMembers({ userId: user.id }, shop.id);
+  const [members, hours] = await Promise.all([listMembers({ userId: user.id }, shop.id), getOpeningHours({ userId: user.id }, shop.id)]);
   return (
     <>
       <PageTitle
@@ -44,6 +46,21 @@ export default async function ShopPage() {
           <ShopInvitations userId={user.id} shopId={shop.id} />
         </Card>
       ) : null}
+      <Card title="Opening hours" className="mt-4">
+        {hours ? (
+          <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-1 text-sm" data-testid="opening-hours">
+            {WEEKDAY_NAMES.map((day, i) => (
+              <div key={day} className="contents">
+                <dt className="text-steel-600">{day}</dt>
+                <dd className="font-mono">{hours[i] ? `${formatMinutes(hours[i].opens)}–${formatMinutes(hours[i].closes)}` : "Closed"}</dd>
+              </div>
+            ))}
+          </dl>
+        ) : (
+          <p className="text-sm text-steel-600">No opening hours set: presses can be booked at any time.</p>
+        )}
+        <p className="mt-2 text-xs text-steel-500">Times in {shop.timeZone}.</p>
+      </Card>
     </>
   );
 }

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { createPress } from "@/lib/data/press-edits";
-import { listPresses } from "@/lib/data/presses";
+import { listPressesWithStatus } from "@/lib/data/press-status";
 import { getActiveShop } from "@/lib/data/shops";
 import { apiRoute, readJsonBody, jsonError, requireApiSession } from "@/lib/http";
 import { ID_PATTERN } from "@/lib/ids";
@@ -10,14 +10,14 @@ import { pressInputSchema } from "@/lib/validation/press";
 const shopIdParam = z.string().regex(ID_PATTERN, "Unknown shop id.");
 const createPressBody = pressInputSchema.extend({ shopId: shopIdParam.optional() });
 
-/** Presses of `?shopId=` (default: the user's working shop); a shop the user is not in lists nothing. */
+/** Presses of `?shopId=` (default: the user's working shop) with their status; a shop the user is not in lists nothing. */
 export const GET = apiRoute(async (req: NextRequest) => {
   const current = await requireApiSession(req);
   const actor = { userId: current.user.id };
   const requested = req.nextUrl.searchParams.get("shopId");
   const shopId = requested ? shopIdParam.parse(requested) : (await getActiveShop(actor, current.user.activeShopId))?.id;
   if (!shopId) return NextResponse.json({ presses: [] });
-  return NextResponse.json({ presses: await listPresses(actor, shopId) });
+  return NextResponse.json({ presses: await listPressesWithStatus(actor, shopId) });
 });
 
 /** Creates a press (SI body) in `shopId` or the working shop. Managers only. */

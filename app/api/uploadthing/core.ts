@@ -41,7 +41,7 @@ async function authorizeUpload(req: NextRequest, input: PhotoInput, fileCount: n
   }
 }
 
-/** Upload routes. One for now: photos of a press, or of one of its parts. */
+/** Upload routes. One for now: photos of a press, or of one of its parts or problem reports. */
 export const uploadRouter = {
   pressPhoto: f({ "image/jpeg": eachType, "image/png": eachType, "image/webp": eachType })
     .input(photoUploadInputSchema)

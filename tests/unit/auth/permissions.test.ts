@@ -17,6 +17,8 @@ const EXPECTED: Record<Action, Role[]> = {
   tagOutPress: ["manager", "inspector"],
   clearTagOut: ["manager", "inspector"],
   bookPress: ["manager", "inspector", "member"],
+  cancelAnyBooking: ["manager"],
+  regenerateStatusLink: ["manager"],
   reportProblem: ["manager", "inspector", "member"],
   closeProblem: ["manager", "inspector"],
   attachPhoto: ["manager", "inspector", "member"],

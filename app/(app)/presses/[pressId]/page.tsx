@@ -19,7 +19,14 @@ import { getPress } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import { evaluateAsBuilt } from "@/lib/press/as-built";
 import { pressTimeline } from "@/lib/press/timeline";
+import { ProblemForm } from "@/components/problems/problem-form";
+import { ProblemList } from "@/components/problems/problem-list";
+import { StatusBadge, StatusReasons } from "@/components/ui/status-badge";
+import { getPressTimeZone } from "@/lib/data/bookings";
+import { getPressStatus } from "@/lib/data/press-status";
+import { listProblems } from "@/lib/data/problems";
 import { correctHoursAction, recordHoursAction } from "./actions";
+import { reportProblemAction } from "./problem-actions";
 
 export const metadata: Metadata = { title: "Press" };
 
@@ -28,7 +35,13 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
   const { user } = await requireShopContext();
   const actor = { userId: user.id };
   const press = await orPageError(getPress(actor, pressId));
-  const [all, readings] = await Promise.all([listComponents(actor, pressId, { includeRemoved: true }), listHourReadings(actor, pressId)]);
+  const [all, readings, status, problems, timeZone] = await Promise.all([
+    listComponents(actor, pressId, { includeRemoved: true }),
+    listHourReadings(actor, pressId),
+    getPressStatus(actor, pressId),
+    listProblems(actor, pressId),
+    getPressTimeZone(actor, pressId),
+  ]);
   const installed = all.filter((c) => !c.removedOn);
   const units = user.unitSystem;
   const asBuilt = evaluateAsBuilt(press, installed, units);
@@ -78,6 +91,8 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
       <nav aria-label="Sections of this press" className="no-print -mx-4 mb-4 overflow-x-auto px-4 lg:hidden">
         <ul className="flex gap-2 whitespace-nowrap text-sm">
           {[
+            ["#status", "Status"],
+            ["#problems", "Problems"],
             ["#as-built", "As-built check"],
             ["#components", "Parts"],
             ["#service", "Service"],
@@ -98,6 +113,31 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         </p>
       ) : null}
       <div className="grid gap-4 lg:grid-cols-2 [&>*]:min-w-0">
+        <div id="status" className="lg:col-span-2">
+          <Card
+            title="Status"
+            actions={
+              <div className="flex flex-wrap gap-2">
+                {status.usable ? (
+                  <Link href={`/bookings?press=${pressId}`} className={buttonClass("secondary")}>
+                    Book
+                  </Link>
+                ) : null}
+                <a href="#problems" className={buttonClass("secondary")}>
+                  Report a problem
+                </a>
+                <Link href={`/presses/${pressId}/status-card`} className={buttonClass("secondary")}>
+                  Status page and QR card
+                </Link>
+              </div>
+            }
+          >
+            <div data-testid="press-status">
+              <StatusBadge status={status} />
+              <StatusReasons status={status} />
+            </div>
+          </Card>
+        </div>
         <Card title="Overview">
           <dl className="grid grid-cols-1 gap-x-6 gap-y-2 text-sm sm:grid-cols-2">
             {rows.map(([label, value]) => (
@@ -137,7 +177,14 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         </div>
         <div id="photos" className="lg:col-span-2">
           <PressPhotos pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} />
-          <p className="mt-2 text-sm text-steel-600">Inspections and bookings of this press will appear on this page as they are added to Presswright.</p>
+        </div>
+        <div id="problems" className="lg:col-span-2">
+          <Card title={`Problem reports (${problems.open.length} open)`}>
+            <div className="grid gap-6 lg:grid-cols-2 [&>*]:min-w-0">
+              <ProblemList pressId={pressId} problems={problems} canClose={can(press.role, "closeProblem")} timeZone={timeZone} />
+              {press.lifecycle !== "retired" ? <ProblemForm pressId={pressId} action={reportProblemAction.bind(null, pressId)} /> : null}
+            </div>
+          </Card>
         </div>
         <div className="lg:col-span-2">
           <SafetyCautions compact />

@@ -1,12 +1,13 @@
 "use server";
 
 import { revalidatePath } from "next/cache";
+import { refusalState } from "@/lib/action-refusal";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
-import { changeMemberRole, LastManagerError, updateShop } from "@/lib/data/shops";
-import { memberRoleSchema, shopSettingsSchema } from "@/lib/validation/shop";
+import { changeMemberRole, LastManagerError, removeMember, updateOpeningHours, updateShop } from "@/lib/data/shops";
+import { memberRoleSchema, openingHoursFromForm, shopSettingsSchema } from "@/lib/validation/shop";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 export async function updateShopAction(_prev: ActionState, form: FormData): Promise<ActionState> {
@@ -40,4 +41,32 @@ export async function changeRoleAction(_prev: ActionState, form: FormData): Prom
   }
   revalidatePath("/shop");
   return { ok: true, message: "Role changed." };
+}
+
+export async function updateOpeningHoursAction(_prev: ActionState, form: FormData): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user, shop } = await requireShopContext();
+  const values = echoValues(form);
+  const parsed = openingHoursFromForm(values);
+  if ("fieldErrors" in parsed) return { ok: false, message: "Please fix the marked days.", fieldErrors: parsed.fieldErrors, values };
+  try {
+    await updateOpeningHours({ userId: user.id }, shop.id, parsed.hours);
+  } catch (error) {
+    return refusalState(error, values, "Only a manager can change the opening hours.");
+  }
+  revalidatePath("/shop", "layout");
+  return { ok: true, message: parsed.hours ? "Opening hours saved. New bookings must fit inside them." : "Bookings may now be made at any time.", values };
+}
+
+export async function removeMemberAction(userId: string, _prev: ActionState): Promise<ActionState> {
+  await assertSameOriginAction();
+  const { user, shop } = await requireShopContext();
+  try {
+    await removeMember({ userId: user.id }, shop.id, userId);
+  } catch (error) {
+    if (error instanceof LastManagerError) return { ok: false, message: error.message };
+    return refusalState(error, {}, "Only a manager can remove members.");
+  }
+  revalidatePath("/shop", "layout");
+  return { ok: true, message: "Removed from the shop." };
 }

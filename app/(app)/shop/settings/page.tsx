@@ -3,9 +3,11 @@ import { forbidden } from "next/navigation";
 import { Card, PageTitle } from "@/components/ui/card";
 import { requireShopContext } from "@/lib/auth/current";
 import { canEditShop } from "@/lib/auth/permissions";
-import { listMembers } from "@/lib/data/shops";
+import { getOpeningHours, listMembers } from "@/lib/data/shops";
 import { timeZoneOptions } from "@/lib/validation/shop";
 import { MemberRoleForm } from "./_components/member-role-form";
+import { OpeningHoursForm } from "./_components/opening-hours-form";
+import { RemoveMemberForm } from "./_components/remove-member-form";
 import { ShopSettingsForm } from "./_components/shop-settings-form";
 
 export const metadata: Metadata = { title: "Shop settings" };
@@ -14,7 +16,7 @@ export const metadata: Metadata = { title: "Shop settings" };
 export default async function ShopSettingsPage() {
   const { user, shop } = await requireShopContext();
   if (!canEditShop(shop.role)) forbidden();
-  const members = await listMembers({ userId: user.id }, shop.id);
+  const [members, hours] = await Promise.all([listMembers({ userId: user.id }, shop.id), getOpeningHours({ userId: user.id }, shop.id)]);
   return (
     <>
       <PageTitle title="Shop settings" subtitle={shop.name} />
@@ -30,10 +32,17 @@ export default async function ShopSettingsPage() {
                   <p className="truncate font-medium">{m.displayName}</p>
                   <p className="truncate text-xs text-steel-500">{m.email}</p>
                 </div>
-                <MemberRoleForm userId={m.userId} role={m.role} name={m.displayName} />
+                <div className="flex flex-wrap items-center gap-1">
+                  <MemberRoleForm userId={m.userId} role={m.role} name={m.displayName} />
+                  {m.userId !== user.id ? <RemoveMemberForm userId={m.userId} name={m.displayName} /> : null}
+                </div>
               </li>
             ))}
           </ul>
+          <p className="mt-3 text-xs text-steel-500">A shop always keeps at least one manager: the last one cannot be demoted or removed.</p>
+        </Card>
+        <Card title="Opening hours">
+          <OpeningHoursForm hours={hours} />
         </Card>
       </div>
     </>
