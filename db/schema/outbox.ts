@@ -17,6 +17,7 @@ export const EMAIL_KINDS = [
 
 export const OUTBOX_STATUSES = ["pending", "sent", "failed"] as const;
 
+/** An attachment as queued: `content` is base64 (binary-safe; the sender decodes it). */
 export type StoredAttachment = { filename: string; contentType: string; content: string };
 
 /**

@@ -39,8 +39,7 @@ export function bookingIcs(booking: Slot & { id: string; pressName: string; shop
 }
 
 export function icsAttachment(ics: string): StoredAttachment {
-  // `content` is the plain UTF-8 text of the calendar file (not base64).
-  return { filename: "booking.ics", contentType: "text/calendar; charset=utf-8; method=PUBLISH", content: ics };
+  return { filename: "booking.ics", contentType: "text/calendar; charset=utf-8; method=PUBLISH", content: Buffer.from(ics, "utf8").toString("base64") };
 }
 
 export function bookingConfirmation(input: {

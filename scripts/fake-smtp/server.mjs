@@ -34,7 +34,13 @@ const smtp = new SMTPServer({
           subject: mail.subject ?? "",
           text: mail.text ?? "",
           html: typeof mail.html === "string" ? mail.html : "",
-          attachments: (mail.attachments ?? []).map((a) => ({ filename: a.filename ?? null, contentType: a.contentType, size: a.size })),
+          attachments: (mail.attachments ?? []).map((a) => ({
+            filename: a.filename ?? null,
+            contentType: a.contentType,
+            size: a.size,
+            // Small text attachments (calendar files) are kept readable for tests; others by size only.
+            content: a.contentType?.startsWith("text/") && a.size <= 64 * 1024 ? a.content.toString("utf8") : null,
+          })),
         });
         log(`stored ${id} for ${session.envelope.rcptTo.map((r) => r.address).join(", ")}`);
         callback();

@@ -1,14 +1,13 @@
-import { and, desc, eq } from "drizzle-orm";
+import { eq } from "drizzle-orm";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { db, pool } from "@/db/client";
 import { WORKSHOP } from "@/db/demo-data";
 import { emailOutbox } from "@/db/schema";
 import { localDate, startOfLocalDay } from "@/lib/time-zone";
+import { waitForMessage } from "../integration/mail";
 import { launchBrowser, newPage, screenshot, signIn } from "./browser";
 
-// The e-mail is read from the outbox table the app commits it to; after the merge the lead
-// switches this to the local SMTP fake's capture.
 let browser: Browser;
 beforeAll(async () => {
   browser = await launchBrowser();
@@ -47,19 +46,19 @@ describe("shared shop: status page, booking, stop-use report", () => {
     await form.getByLabel("Date").fill(day);
     await form.getByLabel("From").fill("07:00");
     await form.getByLabel("To").fill("08:00");
+    const bookedAt = Date.now() - 1000;
     await form.getByRole("button", { name: "Book" }).click();
     await expect(form.getByRole("status").textContent()).resolves.toContain(`Booked ${day} 07:00–08:00`);
 
-    const [mail] = await db
-      .select()
-      .from(emailOutbox)
-      .where(and(eq(emailOutbox.kind, "booking-confirmation"), eq(emailOutbox.toAddress, "tess@millrace-forge.example")))
-      .orderBy(desc(emailOutbox.createdAt))
-      .limit(1);
-    expect(mail?.subject).toContain("Bay 1 H-frame");
-    expect(mail?.textBody).toContain(WORKSHOP.name);
-    expect(mail?.attachments?.[0]?.filename).toBe("booking.ics");
-    expect(mail?.attachments?.[0]?.content).toMatch(/BEGIN:VCALENDAR[\s\S]*DTSTART:/);
+    // The confirmation arrives at the local SMTP fake, delivered by the app's outbox sender.
+    const mail = await waitForMessage(
+      "tess@millrace-forge.example",
+      (m) => Date.parse(m.receivedAt) >= bookedAt && m.subject.startsWith("Booked: Bay 1 H-frame"),
+    );
+    expect(mail.text).toContain(WORKSHOP.name);
+    const ics = mail.attachments?.find((a) => a.filename === "booking.ics");
+    expect(ics?.contentType).toContain("text/calendar");
+    expect(ics?.content).toMatch(/BEGIN:VCALENDAR[\s\S]*DTSTART:/);
 
     // Another member reports a stop-use problem from the same status page.
     const owen = await newPage(browser, 390, 844);

@@ -39,8 +39,9 @@ describe("booking a press", () => {
     expect(mail?.subject).toContain("Test Community Forge");
     expect(mail?.textBody).toContain("Test 20 t press");
     expect(mail?.attachments?.[0]?.filename).toBe("booking.ics");
-    expect(mail?.attachments?.[0]?.content).toContain("BEGIN:VEVENT");
-    expect(mail?.attachments?.[0]?.content).toContain(`UID:${id}@presswright`);
+    const calendar = Buffer.from(mail?.attachments?.[0]?.content ?? "", "base64").toString("utf8");
+    expect(calendar).toContain("BEGIN:VEVENT");
+    expect(calendar).toContain(`UID:${id}@presswright`);
 
     const ics = await icsRoute(getRequest(`/api/bookings/${id}/ics`, await cookie(shop.member)), params("bookingId", id));
     expect(ics.status).toBe(200);
