@@ -32,12 +32,16 @@ export function capRequestBody(req, res, maxBytes) {
     return false;
   }
   let received = 0;
+  let cut = false;
   const push = req.push;
   req.push = function (chunk, encoding) {
+    // Once cut off, nothing more reaches the reader — not even the end of the body, so a truncated
+    // body is never taken for a complete one; `false` makes Node stop reading the socket.
+    if (cut) return false;
     if (chunk !== null && chunk !== undefined) {
       received += chunk.length;
       if (received > maxBytes) {
-        req.push = push;
+        cut = true;
         refuseTooLarge(req, res);
         return false;
       }
