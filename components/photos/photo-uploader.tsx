@@ -12,7 +12,7 @@ import { checkPhotoFiles, explainUploadError, formatBytes } from "./upload-check
 
 export type PartOption = { id: string; label: string };
 /** What the photos attach to; the upload route checks the user may attach to it. */
-export type PhotoTarget = { pressId: string; componentId?: string };
+export type PhotoTarget = { pressId: string; componentId?: string; inspectionItemId?: string };
 
 type Props = {
   target: PhotoTarget;
@@ -56,7 +56,7 @@ export function PhotoUploader({ target, parts = [], onUploaded }: Props) {
     setProblems([]);
     setDone(undefined);
     setProgress(0);
-    const results = await startUpload(files, { pressId: target.pressId, componentId: componentId || undefined, kind, caption: caption || undefined });
+    const results = await startUpload(files, { pressId: target.pressId, componentId: componentId || undefined, inspectionItemId: target.inspectionItemId, kind, caption: caption || undefined });
     if (!results) return;
     const stored: string[] = [];
     const refused: string[] = [];

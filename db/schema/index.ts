@@ -7,3 +7,4 @@ export * from "./components";
 export * from "./photos";
 export * from "./outbox";
 export * from "./tag-outs";
+export * from "./inspections";

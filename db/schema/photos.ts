@@ -3,6 +3,7 @@ import { index, int, mysqlEnum, mysqlTable, varchar } from "drizzle-orm/mysql-co
 import { users } from "./auth";
 import { ID_LENGTH, utc } from "./columns";
 import { components } from "./components";
+import { inspectionAnswers } from "./inspections";
 import { presses } from "./presses";
 
 export const PHOTO_KINDS = ["weld", "leak", "damage", "die", "other"] as const;
@@ -10,8 +11,8 @@ export const PHOTO_KINDS = ["weld", "leak", "damage", "die", "other"] as const;
 /**
  * A photo after the server re-encoded it (no EXIF/GPS left) — the original upload is deleted, so
  * only these two stored files exist. It always belongs to a press and optionally to one record on
- * it; the target columns for service-log entries, inspection items and problem reports gain their
- * foreign keys when those tables arrive.
+ * it; the target columns for service-log entries and problem reports gain their foreign keys when
+ * those tables arrive (inspection items point at `inspection_answers`).
  */
 export const photos = mysqlTable(
   "photos",
@@ -22,7 +23,7 @@ export const photos = mysqlTable(
       .references(() => presses.id, { onDelete: "cascade" }),
     componentId: varchar("component_id", { length: ID_LENGTH }).references(() => components.id, { onDelete: "set null" }),
     serviceEntryId: varchar("service_entry_id", { length: ID_LENGTH }),
-    inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }),
+    inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }).references(() => inspectionAnswers.id, { onDelete: "set null" }),
     problemReportId: varchar("problem_report_id", { length: ID_LENGTH }),
     kind: mysqlEnum("kind", PHOTO_KINDS).notNull().default("other"),
     caption: varchar("caption", { length: 200 }),

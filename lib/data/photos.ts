@@ -1,9 +1,10 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, photos, users } from "@/db/schema";
+import { components, inspectionAnswers, inspections, photos, users } from "@/db/schema";
 import { canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import type { PhotoKind } from "@/lib/photos/kinds";
+import { ConflictError } from "@/lib/errors";
 import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
 import type { PhotoPatch } from "@/lib/validation/photo";
 import type { Actor } from "./actor";
@@ -29,7 +30,7 @@ export type PhotoView = {
 };
 
 /** The record a photo is attached to, after the server checked it. */
-export type PhotoTarget = { pressId: string; componentId: string | null };
+export type PhotoTarget = { pressId: string; componentId: string | null; inspectionItemId?: string | null };
 export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
 export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
 
@@ -67,7 +68,7 @@ function selectViews() {
  */
 export async function authorizePhotoTarget(
   actor: Actor,
-  target: { pressId: string; componentId?: string | null },
+  target: { pressId: string; componentId?: string | null; inspectionItemId?: string | null },
   executor: Executor = db,
 ): Promise<PhotoTarget> {
   const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
@@ -81,7 +82,19 @@ export async function authorizePhotoTarget(
       .limit(1);
     if (!part) throw new NotFoundError("Part not found on this press");
   }
-  return { pressId: target.pressId, componentId };
+  const inspectionItemId = target.inspectionItemId ?? null;
+  if (inspectionItemId) {
+    const [item] = await executor
+      .select({ signedAt: inspections.signedAt })
+      .from(inspectionAnswers)
+      .innerJoin(inspections, eq(inspections.id, inspectionAnswers.inspectionId))
+      .where(and(eq(inspectionAnswers.id, inspectionItemId), eq(inspections.pressId, target.pressId)))
+      .limit(1);
+    if (!item) throw new NotFoundError("Inspection item not found on this press");
+    // A signed inspection is evidence as signed: no photos added afterwards.
+    if (item.signedAt) throw new ConflictError("This inspection is signed: its record can no longer change.");
+  }
+  return { pressId: target.pressId, componentId, inspectionItemId };
 }
 
 /**
@@ -95,6 +108,7 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
       id: photo.id,
       pressId: target.pressId,
       componentId: target.componentId,
+      inspectionItemId: target.inspectionItemId ?? null,
       kind: photo.kind,
       caption: photo.caption,
       uploadedBy: actor.userId,

@@ -65,8 +65,8 @@ export async function storeUploadedPhoto(
     if (!full || !thumb) throw new StorageUnavailableError("store the photo");
     await deleteStoredFiles([original.key]);
     toDelete.delete(original.key);
-    const { userId, pressId, componentId, kind, caption } = metadata;
-    await createPhotoRecord({ userId }, { pressId, componentId }, { id, kind, caption, full: stored(full, processed.full), thumb: stored(thumb, processed.thumb) });
+    const { userId, pressId, componentId, inspectionItemId, kind, caption } = metadata;
+    await createPhotoRecord({ userId }, { pressId, componentId, inspectionItemId }, { id, kind, caption, full: stored(full, processed.full), thumb: stored(thumb, processed.thumb) });
     return { photoId: id };
   } catch (error) {
     await deleteStoredFilesQuietly([...toDelete]);

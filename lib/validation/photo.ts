@@ -18,6 +18,7 @@ const captionSchema = z
 export const photoUploadInputSchema = z.strictObject({
   pressId: recordId("press"),
   componentId: recordId("part").optional(),
+  inspectionItemId: recordId("inspection item").optional(),
   kind: photoKindSchema,
   caption: captionSchema.optional(),
 });
