@@ -10,6 +10,7 @@ import mysql from "mysql2/promise";
 import { ARGON2_PARAMS } from "../lib/auth/password-rules";
 import { newId } from "../lib/ids";
 import { migrationDatabaseUrl } from "./config";
+import { seedDemoInspections } from "./demo-inspections";
 import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
 import { BUILDER_PRESSES, DEMO_PASSWORD, DEMO_USERS, ratedForceKn, WORKSHOP, WORKSHOP_PRESSES, type DemoPress } from "./demo-data";
 import * as schema from "./schema";
@@ -63,6 +64,7 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
         await tx.insert(schema.memberships).values({ shopId: workshopId, userId: ids[key]!, role });
       }
       for (const p of WORKSHOP_PRESSES) await insertPress(tx, workshopId, p);
+      await seedDemoInspections(tx, workshopId, ids, Object.fromEntries(DEMO_USERS.map((u) => [u.key, u.displayName])));
     });
     return true;
   } finally {

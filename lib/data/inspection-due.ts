@@ -1,7 +1,9 @@
 import "server-only";
 import { and, eq, inArray, isNotNull, max } from "drizzle-orm";
-import { inspections, inspectionTemplates, presses } from "@/db/schema";
+import { db } from "@/db/client";
+import { inspections, inspectionTemplates, memberships, presses } from "@/db/schema";
 import { dueState, hasCalendar } from "@/lib/inspections/due";
+import type { Actor } from "./actor";
 import type { Executor } from "./press-access";
 
 export type InspectionDueItem = { templateId: string; name: string; state: "due-soon" | "overdue"; dueAt: Date | null };
@@ -36,4 +38,15 @@ export async function listInspectionDueByPress(executor: Executor, pressIds: rea
     byPress.set(row.pressId, list);
   }
   return byPress;
+}
+
+/** Due inspections of the given presses after checking each is in the actor's shops (others are skipped). */
+export async function listDueForActor(actor: Actor, pressIds: readonly string[], now = new Date()): Promise<Map<string, InspectionDueItem[]>> {
+  if (pressIds.length === 0) return new Map();
+  const allowed = await db
+    .select({ id: presses.id })
+    .from(presses)
+    .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, actor.userId)))
+    .where(inArray(presses.id, [...pressIds]));
+  return listInspectionDueByPress(db, allowed.map((p) => p.id), now);
 }

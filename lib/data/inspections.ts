@@ -1,8 +1,8 @@
 import "server-only";
-import { and, asc, eq, inArray } from "drizzle-orm";
+import { and, asc, count, eq, inArray } from "drizzle-orm";
 import { z } from "zod";
 import { db } from "@/db/client";
-import { inspectionAnswerOps, inspectionAnswers, inspections, presses, users, type Outcome, type TemplateItem } from "@/db/schema";
+import { inspectionAnswerOps, inspectionAnswers, inspections, photos, presses, users, type Outcome, type TemplateItem } from "@/db/schema";
 import { can, inspectionAction, NotFoundError, type Role } from "@/lib/auth/permissions";
 import { ConflictError } from "@/lib/errors";
 import { newId } from "@/lib/ids";
@@ -12,7 +12,7 @@ import { getTemplate } from "./inspection-templates";
 import { assertNotRetired, pressAccess, type Executor } from "./press-access";
 
 export type AnswerView = { answerId: string; outcome: Outcome | null; note: string | null; answeredAt: Date | null };
-export type InspectionItemView = TemplateItem & AnswerView;
+export type InspectionItemView = TemplateItem & AnswerView & { photos: number };
 
 export type InspectionView = {
   id: string;
@@ -95,7 +95,7 @@ export async function loadAnswers(executor: Executor, inspectionId: string) {
 }
 
 /** Snapshot items joined with their answers, in checklist order. */
-export function mergeItems(items: readonly TemplateItem[], answers: Awaited<ReturnType<typeof loadAnswers>>): (InspectionItemView & { answeredBy: string | null })[] {
+export function mergeItems(items: readonly TemplateItem[], answers: Awaited<ReturnType<typeof loadAnswers>>): (TemplateItem & AnswerView & { answeredBy: string | null })[] {
   const byKey = new Map(answers.map((a) => [a.itemKey, a]));
   return items.map((item) => {
     const a = byKey.get(item.key);
@@ -111,6 +111,7 @@ export async function getInspection(actor: Actor, inspectionId: string): Promise
     db.select({ name: presses.name }).from(presses).where(eq(presses.id, row.pressId)),
     row.startedBy ? db.select({ name: users.displayName }).from(users).where(eq(users.id, row.startedBy)) : Promise.resolve([]),
   ]);
+  const photoCounts = await countPhotos(answers.map((a) => a.answerId));
   return {
     id: row.id,
     pressId: row.pressId,
@@ -120,7 +121,7 @@ export async function getInspection(actor: Actor, inspectionId: string): Promise
     templateName: row.templateName,
     cadence: row.cadence,
     signerRole: row.signerRole,
-    items: mergeItems(row.items, answers).map(({ answeredBy: _unused, ...item }) => item),
+    items: mergeItems(row.items, answers).map(({ answeredBy: _unused, ...item }) => ({ ...item, photos: photoCounts.get(item.answerId) ?? 0 })),
     startedAt: row.startedAt,
     startedByName: starter?.name ?? null,
     result: row.result,
@@ -133,6 +134,16 @@ export async function getInspection(actor: Actor, inspectionId: string): Promise
     mayPerform: can(access.role, inspectionAction(row.signerRole, "perform")) && !row.signedAt,
     maySign: can(access.role, inspectionAction(row.signerRole, "sign")) && !row.signedAt,
   };
+}
+
+async function countPhotos(answerIds: string[]): Promise<Map<string, number>> {
+  if (answerIds.length === 0) return new Map();
+  const rows = await db
+    .select({ id: photos.inspectionItemId, n: count() })
+    .from(photos)
+    .where(inArray(photos.inspectionItemId, answerIds))
+    .groupBy(photos.inspectionItemId);
+  return new Map(rows.map((r) => [r.id ?? "", r.n]));
 }
 
 function badItems(row: InspectionRow, patch: AnswerPatch): z.ZodError | null {

@@ -1,5 +1,3 @@
-import "server-only";
-
 /** Raised when this server cannot sign: production without a chain key (answered 503). */
 export class SigningUnavailableError extends Error {
   constructor() {
@@ -9,7 +7,7 @@ export class SigningUnavailableError extends Error {
 }
 
 // Outside production only, so local runs and tests work without set-up; production refuses to sign.
-const LOCAL_DEVELOPMENT_KEY = "presswright-local-development-chain-key-not-secret";
+export const LOCAL_DEVELOPMENT_KEY = "presswright-local-development-chain-key-not-secret";
 
 /**
  * The HMAC key of the inspection chain. It lives in the environment, never in the database, so
