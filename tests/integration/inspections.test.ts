@@ -10,7 +10,10 @@ import { migrationDatabaseUrl } from "@/db/config";
 import { emailOutbox, inspectionAnswerOps, inspectionAnswers, inspections, memberships, presses, shops } from "@/db/schema";
 import { createSession } from "@/lib/auth/session";
 import { ReauthRequiredError } from "@/lib/auth/recent-sign-in";
-import { listTemplates } from "@/lib/data/inspection-templates";
+import { POST as tagOutRoute } from "@/app/api/presses/[pressId]/tag-outs/route";
+import { POST as clearRoute } from "@/app/api/tag-outs/[tagOutId]/clear/route";
+import { PUT as putTemplateRoute } from "@/app/api/inspection-templates/[templateId]/route";
+import { getTemplate, listTemplates } from "@/lib/data/inspection-templates";
 import { authorizePhotoTarget } from "@/lib/data/photos";
 import { ConflictError } from "@/lib/errors";
 import { signInspection, verifyPressChain } from "@/lib/data/inspection-sign";
@@ -198,5 +201,40 @@ describe("inspections", () => {
     const [signed] = await db.select({ id: inspections.id }).from(inspections).where(and(eq(inspections.pressId, pressId), eq(inspections.chainSeq, 2)));
     const signedItem = (await getInspection({ userId: inspector.userId }, signed!.id)).items[0]!.answerId;
     await expect(authorizePhotoTarget({ userId: inspector.userId }, { pressId, inspectionItemId: signedItem })).rejects.toBeInstanceOf(ConflictError);
+  });
+
+  it("editing a checklist changes new runs only; members may not edit it", async () => {
+    const { id: before } = (await (await start(inspector)).json()) as { id: string };
+    const template = await getTemplate({ userId: manager.userId }, monthlyId);
+    const items = [...template.items.map(({ key, area, text, guidance, critical, photoOnFail, lockout }) => ({ key, area, text, guidance, critical, photoOnFail, lockout })), { area: "electrical" as const, text: "Emergency stop button latches", critical: true }];
+    const byMember = await putTemplateRoute(jsonRequest(`/api/inspection-templates/${monthlyId}`, { name: template.name, cadence: "monthly", items }, await cookie(member), "PUT"), params("templateId", monthlyId));
+    expect(byMember.status).toBe(403);
+    const ok = await putTemplateRoute(jsonRequest(`/api/inspection-templates/${monthlyId}`, { name: "Monthly inspection v2", cadence: "monthly", items }, await cookie(manager), "PUT"), params("templateId", monthlyId));
+    expect(ok.status).toBe(200);
+    const { id: after } = (await (await start(inspector)).json()) as { id: string };
+    const [old, fresh] = await Promise.all([getInspection({ userId: member.userId }, before), getInspection({ userId: member.userId }, after)]);
+    expect(old.templateName).toBe("Monthly inspection");
+    expect(old.items).toHaveLength(template.items.length);
+    expect(fresh.templateName).toBe("Monthly inspection v2");
+    expect(fresh.items.at(-1)).toMatchObject({ key: "item-1", text: "Emergency stop button latches", critical: true });
+  });
+
+  it("managers and inspectors tag out by hand and clear with a recorded reason; members may not", async () => {
+    const byMember = await tagOutRoute(jsonRequest(`/api/presses/${pressId}/tag-outs`, { reason: "Looks wrong" }, await cookie(member)), params("pressId", pressId));
+    expect(byMember.status).toBe(403);
+    const empty = await tagOutRoute(jsonRequest(`/api/presses/${pressId}/tag-outs`, { reason: "  " }, await cookie(inspector)), params("pressId", pressId));
+    expect(empty.status).toBe(400);
+    const res = await tagOutRoute(jsonRequest(`/api/presses/${pressId}/tag-outs`, { reason: "Pump being rebuilt" }, await cookie(inspector)), params("pressId", pressId));
+    expect(res.status).toBe(201);
+    const { id } = (await res.json()) as { id: string };
+    const clearByMember = await clearRoute(jsonRequest(`/api/tag-outs/${id}/clear`, { reason: "Fine now" }, await cookie(member)), params("tagOutId", id));
+    expect(clearByMember.status).toBe(403);
+    const clearByOutsider = await clearRoute(jsonRequest(`/api/tag-outs/${id}/clear`, { reason: "Fine now" }, await cookie(outsider)), params("tagOutId", id));
+    expect(clearByOutsider.status).toBe(404);
+    const cleared = await clearRoute(jsonRequest(`/api/tag-outs/${id}/clear`, { reason: "Pump rebuilt and run to pressure" }, await cookie(manager)), params("tagOutId", id));
+    expect(cleared.status).toBe(200);
+    expect((await listOpenTagOuts(db, [pressId])).get(pressId)).toBeUndefined();
+    const again = await clearRoute(jsonRequest(`/api/tag-outs/${id}/clear`, { reason: "Twice" }, await cookie(manager)), params("tagOutId", id));
+    expect(again.status).toBe(404);
   });
 });

@@ -31,7 +31,15 @@ export default async function InspectionsPage({ searchParams }: { searchParams: 
   const active = presses.filter((p) => p.lifecycle !== "retired");
   return (
     <>
-      <PageTitle title="Inspections" subtitle={`Checklists run at the press and signed off, for ${shop.name}.`} />
+      <PageTitle
+        title="Inspections"
+        subtitle={`Checklists run at the press and signed off, for ${shop.name}.`}
+        actions={
+          <Link href="/inspections/templates" className="text-sm font-semibold text-oil-700 underline">
+            Checklists
+          </Link>
+        }
+      />
       <div className="grid gap-4 lg:grid-cols-2 [&>*]:min-w-0">
         <Card title="Start an inspection">
           {active.length > 0 ? (
