@@ -1,7 +1,7 @@
 import "server-only";
 import { and, asc, count, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { inspectionTemplates, memberships, shops, type Cadence, type SignerRole, type TemplateItem } from "@/db/schema";
+import { CADENCES, inspectionTemplates, memberships, shops, type Cadence, type SignerRole, type TemplateItem } from "@/db/schema";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import { newId } from "@/lib/ids";
 import { DEFAULT_TEMPLATES } from "@/lib/inspections/defaults";
@@ -55,11 +55,13 @@ async function shopRole(executor: Executor, actor: Actor, shopId: string): Promi
 export async function listTemplates(actor: Actor, shopId: string, options: { includeArchived?: boolean } = {}): Promise<TemplateView[]> {
   await shopRole(db, actor, shopId);
   await ensureDefaultTemplates(db, shopId);
-  return db
+  const rows = await db
     .select(viewColumns)
     .from(inspectionTemplates)
     .where(and(eq(inspectionTemplates.shopId, shopId), options.includeArchived ? undefined : eq(inspectionTemplates.archived, false)))
-    .orderBy(asc(inspectionTemplates.createdAt), asc(inspectionTemplates.name));
+    .orderBy(asc(inspectionTemplates.name));
+  // Most frequent first: before each use, weekly, monthly, yearly, after a modification.
+  return rows.sort((a, b) => CADENCES.indexOf(a.cadence) - CADENCES.indexOf(b.cadence));
 }
 
 /** One checklist. Authorization: members of its shop; another shop's is NotFoundError. */

@@ -117,6 +117,14 @@ describe("inspections", () => {
     expect(await item(page, "relief").getByRole("button", { name: "Pass", exact: true }).getAttribute("aria-pressed")).toBe("true");
     await expect.poll(() => page.getByText("4 of 8 answered").count()).toBe(1);
     await screenshot(page, "inspection-offline-390");
+    // The worker keeps run pages and static assets only: no API answers, no other signed-in page.
+    const cached = await page.evaluate(async () => {
+      const paths: string[] = [];
+      for (const name of await caches.keys()) for (const req of await (await caches.open(name)).keys()) paths.push(new URL(req.url).pathname);
+      return paths;
+    });
+    expect(cached).toContain(`/inspections/${id}/run`);
+    expect(cached.filter((p) => !/^\/(_next\/static\/|fonts\/|icon\.svg$|inspections\/[a-z2-7]{24}\/run$)/.test(p))).toEqual([]);
 
     const db = drizzle(pool);
     const before = await db.select().from(inspectionAnswerOps).where(eq(inspectionAnswerOps.inspectionId, id));
