@@ -146,8 +146,10 @@ export async function getPhoto(actor: Actor, photoId: string): Promise<PhotoView
 /** The photo's press, storage keys and whether the actor may change it (uploader or manager). */
 async function photoForChange(executor: Executor, actor: Actor, photoId: string) {
   const [row] = await executor
-    .select({ pressId: photos.pressId, uploadedBy: photos.uploadedBy, fileKey: photos.fileKey, thumbKey: photos.thumbKey })
+    .select({ pressId: photos.pressId, uploadedBy: photos.uploadedBy, fileKey: photos.fileKey, thumbKey: photos.thumbKey, signedAt: inspections.signedAt })
     .from(photos)
+    .leftJoin(inspectionAnswers, eq(inspectionAnswers.id, photos.inspectionItemId))
+    .leftJoin(inspections, eq(inspections.id, inspectionAnswers.inspectionId))
     .where(eq(photos.id, photoId))
     .limit(1);
   if (!row) throw new NotFoundError("Photo not found");
@@ -155,6 +157,8 @@ async function photoForChange(executor: Executor, actor: Actor, photoId: string)
   const access = await pressAccess(executor, actor, row.pressId, "viewPress");
   const isUploader = row.uploadedBy === actor.userId;
   if (!canEditPhoto(access.role, isUploader)) throw new ForbiddenError(isUploader ? "attachPhoto" : "editAnyPhoto");
+  // Evidence of a signed inspection stays as it was signed.
+  if (row.signedAt) throw new ConflictError("This photo belongs to a signed inspection and can no longer change.");
   return { row, access };
 }
 

@@ -7,14 +7,14 @@ import { GET as verifyRoute } from "@/app/api/presses/[pressId]/inspections/veri
 import { POST as startRoute } from "@/app/api/presses/[pressId]/inspections/route";
 import { db } from "@/db/client";
 import { migrationDatabaseUrl } from "@/db/config";
-import { emailOutbox, inspectionAnswerOps, inspectionAnswers, inspections, memberships, presses, shops } from "@/db/schema";
+import { emailOutbox, inspectionAnswerOps, inspectionAnswers, inspections, memberships, photos, presses, shops } from "@/db/schema";
 import { createSession } from "@/lib/auth/session";
 import { ReauthRequiredError } from "@/lib/auth/recent-sign-in";
 import { POST as tagOutRoute } from "@/app/api/presses/[pressId]/tag-outs/route";
 import { POST as clearRoute } from "@/app/api/tag-outs/[tagOutId]/clear/route";
 import { PUT as putTemplateRoute } from "@/app/api/inspection-templates/[templateId]/route";
 import { getTemplate, listTemplates } from "@/lib/data/inspection-templates";
-import { authorizePhotoTarget } from "@/lib/data/photos";
+import { authorizePhotoTarget, deletePhoto } from "@/lib/data/photos";
 import { ConflictError } from "@/lib/errors";
 import { signInspection, verifyPressChain } from "@/lib/data/inspection-sign";
 import { getInspection, updateAnswers } from "@/lib/data/inspections";
@@ -236,5 +236,20 @@ describe("inspections", () => {
     expect((await listOpenTagOuts(db, [pressId])).get(pressId)).toBeUndefined();
     const again = await clearRoute(jsonRequest(`/api/tag-outs/${id}/clear`, { reason: "Twice" }, await cookie(manager)), params("tagOutId", id));
     expect(again.status).toBe(404);
+  });
+
+  it("a photo of a signed inspection can no longer be deleted", async () => {
+    const { id } = (await (await start(inspector)).json()) as { id: string };
+    const view = await getInspection({ userId: inspector.userId }, id);
+    const photoId = newId();
+    const file = { key: `k-${photoId}`, url: "http://localhost:4010/f/x.jpg" };
+    await db.insert(photos).values({
+      id: photoId, pressId, inspectionItemId: view.items[0]!.answerId, uploadedBy: inspector.userId, fileKey: file.key, fileUrl: file.url, width: 10, height: 10, bytes: 100,
+      thumbKey: `${file.key}-t`, thumbUrl: file.url, thumbWidth: 5, thumbHeight: 5, thumbBytes: 50,
+    });
+    await answerAll(inspector, id);
+    await signInspection(fresh(inspector), id);
+    await expect(deletePhoto({ userId: inspector.userId }, photoId)).rejects.toBeInstanceOf(ConflictError);
+    expect(await db.select({ id: photos.id }).from(photos).where(eq(photos.id, photoId))).toHaveLength(1);
   });
 });
