@@ -8,7 +8,8 @@ const nextConfig: NextConfig = {
   reactStrictMode: true,
   // forbidden() and forbidden.tsx render our 403 page.
   experimental: { authInterrupts: true },
-  serverExternalPackages: ["@node-rs/argon2", "mysql2"],
+  // esbuild bundles the inspection run's service worker at build time (app/serwist/[path]/route.ts).
+  serverExternalPackages: ["@node-rs/argon2", "mysql2", "esbuild"],
   images: {
     // Photos come from the upload service's file host only (lib/uploads/hosts.ts).
     remotePatterns: photoImagePatterns(process.env),

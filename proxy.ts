@@ -27,6 +27,8 @@ export function proxy(request: NextRequest): NextResponse {
     `img-src 'self' blob: data: ${uploads.img.join(" ")}`,
     "font-src 'self'",
     `connect-src 'self' ${uploads.connect.join(" ")}`,
+    // The inspection run's service worker (app/sw.ts); 'strict-dynamic' would otherwise refuse it.
+    "worker-src 'self'",
     "object-src 'none'",
     "base-uri 'none'",
     "form-action 'self'",

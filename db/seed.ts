@@ -11,6 +11,7 @@ import { ARGON2_PARAMS } from "../lib/auth/password-rules";
 import { newId } from "../lib/ids";
 import { migrationDatabaseUrl } from "./config";
 import { addLocalDays, localDate } from "../lib/schedule";
+import { seedDemoInspections } from "./demo-inspections";
 import { DEMO_PARTS, DEMO_READINGS } from "./demo-parts";
 import { DEMO_SERVICE } from "./demo-service";
 import { fromWallTime, startOfLocalDay, toWallTime } from "../lib/time-zone";
@@ -97,6 +98,7 @@ export async function seedDemo(url = migrationDatabaseUrl()): Promise<boolean> {
       const pressIds = new Map<string, string>();
       for (const p of WORKSHOP_PRESSES) pressIds.set(p.name, await insertPress(tx, workshopId, p, { people, timeZone: WORKSHOP.timeZone }));
       await tx.insert(bookings).values(demoBookings(pressIds, ids));
+      await seedDemoInspections(tx, workshopId, ids, Object.fromEntries(DEMO_USERS.map((u) => [u.key, u.displayName])));
     });
     return true;
   } finally {

@@ -4,8 +4,10 @@ import { z } from "zod";
 import { isSameOriginRequest } from "@/lib/auth/csrf";
 import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { ReauthRequiredError } from "@/lib/auth/recent-sign-in";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
 import { BusyError, ConflictError, DATABASE_UNAVAILABLE_MESSAGE, FieldError, isDatabaseUnavailable, LockedError } from "@/lib/errors";
+import { SigningUnavailableError } from "@/lib/inspections/chain-key";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 /** Largest JSON body any route reads: the biggest real one (a full sizing input) is about 1 kB. */
@@ -112,6 +114,8 @@ export function apiRoute<C>(handler: Handler<C>, options: { csrf?: boolean } = {
 
 export function errorResponse(error: unknown): NextResponse {
   if (error instanceof UnauthorizedError) return jsonError(401, error.message);
+  if (error instanceof ReauthRequiredError) return jsonError(401, error.message, { reauthenticate: true });
+  if (error instanceof SigningUnavailableError) return jsonError(503, error.message);
   if (error instanceof NotFoundError) return jsonError(404, error.message);
   if (error instanceof ForbiddenError) return jsonError(403, error.message);
   if (error instanceof ConflictError) return jsonError(409, error.message);
@@ -135,3 +139,4 @@ export function errorResponse(error: unknown): NextResponse {
   console.error("[api] unexpected error", error);
   return jsonError(500, "Something went wrong on our side.");
 }
+

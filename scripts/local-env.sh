@@ -9,3 +9,5 @@ if [[ "$UPLOADTHING_TOKEN" == "eyJhcGlLZXkiOiJza19sb2NhbCIsImFwcElkIjoibG9jYWxhc
   export UPLOADTHING_UFS_APP_ID_LOCATION="${UPLOADTHING_UFS_APP_ID_LOCATION:-path}"
   export UPLOADTHING_LOCAL_FAKE=1
 fi
+# The inspection chain's HMAC key for local runs and tests only; production sets its own secret.
+export INSPECTION_CHAIN_KEY="${INSPECTION_CHAIN_KEY:-presswright-local-development-chain-key-not-secret}"

@@ -12,7 +12,7 @@ import { checkPhotoFiles, explainUploadError, formatBytes } from "./upload-check
 
 export type PartOption = { id: string; label: string };
 /** What the photos attach to; the upload route checks the user may attach to it. */
-export type PhotoTarget = { pressId: string; componentId?: string; serviceEntryId?: string; problemReportId?: string };
+export type PhotoTarget = { pressId: string; componentId?: string; serviceEntryId?: string; problemReportId?: string; inspectionItemId?: string };
 
 type Props = {
   target: PhotoTarget;
@@ -61,6 +61,7 @@ export function PhotoUploader({ target, parts = [], onUploaded }: Props) {
       componentId: componentId || undefined,
       serviceEntryId: target.serviceEntryId,
       problemReportId: target.problemReportId,
+      inspectionItemId: target.inspectionItemId,
       kind,
       caption: caption || undefined,
     });

@@ -10,3 +10,4 @@ export * from "./tag-outs";
 export * from "./service";
 export * from "./invitations";
 export * from "./problems";
+export * from "./inspections";

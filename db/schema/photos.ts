@@ -3,6 +3,7 @@ import { index, int, mysqlEnum, mysqlTable, varchar } from "drizzle-orm/mysql-co
 import { users } from "./auth";
 import { ID_LENGTH, utc } from "./columns";
 import { components } from "./components";
+import { inspectionAnswers } from "./inspections";
 import { presses } from "./presses";
 import { serviceEntries } from "./service";
 import { problemReports } from "./problems";
@@ -12,8 +13,7 @@ export const PHOTO_KINDS = ["weld", "leak", "damage", "die", "other"] as const;
 /**
  * A photo after the server re-encoded it (no EXIF/GPS left) — the original upload is deleted, so
  * only these two stored files exist. It always belongs to a press and optionally to one record on
- * it; the target columns for inspection items and problem reports gain their foreign keys when
- * those tables arrive.
+ * it: a part, a service-log entry, an inspection answer or a problem report.
  */
 export const photos = mysqlTable(
   "photos",
@@ -24,7 +24,7 @@ export const photos = mysqlTable(
       .references(() => presses.id, { onDelete: "cascade" }),
     componentId: varchar("component_id", { length: ID_LENGTH }).references(() => components.id, { onDelete: "set null" }),
     serviceEntryId: varchar("service_entry_id", { length: ID_LENGTH }).references(() => serviceEntries.id, { onDelete: "set null" }),
-    inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }),
+    inspectionItemId: varchar("inspection_item_id", { length: ID_LENGTH }).references(() => inspectionAnswers.id, { onDelete: "set null" }),
     problemReportId: varchar("problem_report_id", { length: ID_LENGTH }).references(() => problemReports.id, { onDelete: "set null" }),
     kind: mysqlEnum("kind", PHOTO_KINDS).notNull().default("other"),
     caption: varchar("caption", { length: 200 }),

@@ -25,6 +25,10 @@ export const ACTIONS = {
   editServicePlan: ["manager"],
   performInspection: ["manager", "inspector"],
   signInspection: ["manager", "inspector"],
+  /** Checklists whose template lets any member sign (the before-each-use check). */
+  performPreUseCheck: ["manager", "inspector", "member"],
+  signPreUseCheck: ["manager", "inspector", "member"],
+  editInspectionTemplates: ["manager"],
   tagOutPress: ["manager", "inspector"],
   clearTagOut: ["manager", "inspector"],
   bookPress: ["manager", "inspector", "member"],
@@ -49,6 +53,16 @@ export const canEditShop = (role: Role | null): boolean => can(role, "editShop")
 export const canEditPress = (role: Role | null): boolean => can(role, "editPress");
 /** Photos: the uploader (still a member who may attach photos) or a manager. */
 export const canEditPhoto = (role: Role | null, isUploader: boolean): boolean => can(role, isUploader ? "attachPhoto" : "editAnyPhoto");
+
+/**
+ * The action that running or signing an inspection needs: a template signed by "member" (the
+ * before-each-use check) lets anyone in the shop do it; every other checklist needs an inspector
+ * (or manager).
+ */
+export function inspectionAction(signerRole: "member" | "inspector", step: "perform" | "sign"): Action {
+  if (signerRole === "member") return step === "perform" ? "performPreUseCheck" : "signPreUseCheck";
+  return step === "perform" ? "performInspection" : "signInspection";
+}
 
 /** Raised by the data layer when the actor lacks the role; pages turn it into forbidden(), APIs into 403. */
 export class ForbiddenError extends Error {

@@ -1,10 +1,11 @@
 import "server-only";
 import { and, desc, eq } from "drizzle-orm";
 import { db } from "@/db/client";
-import { components, memberships, photos, presses, problemReports, serviceEntries, users } from "@/db/schema";
+import { components, inspectionAnswers, inspections, memberships, photos, presses, problemReports, serviceEntries, users } from "@/db/schema";
 import { assertCan, canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { photoFileUrl, type PhotoVariant } from "@/lib/photos/file-urls";
 import type { PhotoKind } from "@/lib/photos/kinds";
+import { ConflictError } from "@/lib/errors";
 import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
 import type { PhotoPatch } from "@/lib/validation/photo";
 import type { Actor } from "./actor";
@@ -30,7 +31,13 @@ export type PhotoView = {
 };
 
 /** The record a photo is attached to, after the server checked it. */
-export type PhotoTarget = { pressId: string; componentId: string | null; serviceEntryId?: string | null; problemReportId?: string | null };
+export type PhotoTarget = {
+  pressId: string;
+  componentId: string | null;
+  serviceEntryId?: string | null;
+  problemReportId?: string | null;
+  inspectionItemId?: string | null;
+};
 export type StoredImage = StoredFile & { width: number; height: number; bytes: number };
 export type NewPhoto = { id: string; kind: PhotoKind; caption: string | null; full: StoredImage; thumb: StoredImage };
 
@@ -66,7 +73,7 @@ function selectViews() {
  */
 export async function authorizePhotoTarget(
   actor: Actor,
-  target: { pressId: string; componentId?: string | null; serviceEntryId?: string | null; problemReportId?: string | null },
+  target: { pressId: string; componentId?: string | null; serviceEntryId?: string | null; problemReportId?: string | null; inspectionItemId?: string | null },
   executor: Executor = db,
 ): Promise<PhotoTarget> {
   const access = await pressAccess(executor, actor, target.pressId, "attachPhoto");
@@ -98,7 +105,19 @@ export async function authorizePhotoTarget(
       .limit(1);
     if (!report) throw new NotFoundError("Problem report not found on this press");
   }
-  return { pressId: target.pressId, componentId, serviceEntryId, problemReportId };
+  const inspectionItemId = target.inspectionItemId ?? null;
+  if (inspectionItemId) {
+    const [item] = await executor
+      .select({ signedAt: inspections.signedAt })
+      .from(inspectionAnswers)
+      .innerJoin(inspections, eq(inspections.id, inspectionAnswers.inspectionId))
+      .where(and(eq(inspectionAnswers.id, inspectionItemId), eq(inspections.pressId, target.pressId)))
+      .limit(1);
+    if (!item) throw new NotFoundError("Inspection item not found on this press");
+    // A signed inspection is evidence as signed: no photos added afterwards.
+    if (item.signedAt) throw new ConflictError("This inspection is signed: its record can no longer change.");
+  }
+  return { pressId: target.pressId, componentId, serviceEntryId, problemReportId, inspectionItemId };
 }
 
 /**
@@ -114,6 +133,7 @@ export async function createPhotoRecord(actor: Actor, target: PhotoTarget, photo
       componentId: target.componentId,
       serviceEntryId: target.serviceEntryId ?? null,
       problemReportId: target.problemReportId ?? null,
+      inspectionItemId: target.inspectionItemId ?? null,
       kind: photo.kind,
       caption: photo.caption,
       uploadedBy: actor.userId,
@@ -187,8 +207,10 @@ export async function photoFileKey(actor: Actor, photoId: string, variant: Photo
 /** The photo's press, storage keys and whether the actor may change it (uploader or manager). */
 async function photoForChange(executor: Executor, actor: Actor, photoId: string) {
   const [row] = await executor
-    .select({ pressId: photos.pressId, uploadedBy: photos.uploadedBy, fileKey: photos.fileKey, thumbKey: photos.thumbKey })
+    .select({ pressId: photos.pressId, uploadedBy: photos.uploadedBy, fileKey: photos.fileKey, thumbKey: photos.thumbKey, signedAt: inspections.signedAt })
     .from(photos)
+    .leftJoin(inspectionAnswers, eq(inspectionAnswers.id, photos.inspectionItemId))
+    .leftJoin(inspections, eq(inspections.id, inspectionAnswers.inspectionId))
     .where(eq(photos.id, photoId))
     .limit(1);
   if (!row) throw new NotFoundError("Photo not found");
@@ -196,6 +218,8 @@ async function photoForChange(executor: Executor, actor: Actor, photoId: string)
   const access = await pressAccess(executor, actor, row.pressId, "viewPress");
   const isUploader = row.uploadedBy === actor.userId;
   if (!canEditPhoto(access.role, isUploader)) throw new ForbiddenError(isUploader ? "attachPhoto" : "editAnyPhoto");
+  // Evidence of a signed inspection stays as it was signed.
+  if (row.signedAt) throw new ConflictError("This photo belongs to a signed inspection and can no longer change.");
   return { row, access };
 }
 

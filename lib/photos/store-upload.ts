@@ -64,10 +64,10 @@ export async function storeUploadedPhoto(
     if (!full || !thumb) throw new StorageUnavailableError("store the photo");
     await deleteStoredFiles([original.key]);
     toDelete.delete(original.key);
-    const { userId, pressId, componentId, serviceEntryId, problemReportId, kind, caption } = metadata;
+    const { userId, pressId, componentId, serviceEntryId, problemReportId, inspectionItemId, kind, caption } = metadata;
     await createPhotoRecord(
       { userId },
-      { pressId, componentId, serviceEntryId, problemReportId },
+      { pressId, componentId, serviceEntryId, problemReportId, inspectionItemId },
       { id, kind, caption, full: stored(full, processed.full), thumb: stored(thumb, processed.thumb) },
     );
     return { photoId: id };

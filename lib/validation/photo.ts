@@ -20,6 +20,7 @@ export const photoUploadInputSchema = z.strictObject({
   componentId: recordId("part").optional(),
   serviceEntryId: recordId("service entry").optional(),
   problemReportId: recordId("problem report").optional(),
+  inspectionItemId: recordId("inspection item").optional(),
   kind: photoKindSchema,
   caption: captionSchema.optional(),
 });

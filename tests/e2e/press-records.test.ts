@@ -46,6 +46,9 @@ describe("press records", () => {
     await screenshot(page, "press-as-built-fail");
 
     await page.getByRole("link", { name: "Replace Cap-end hose" }).click();
+    // A click before the press page has hydrated loads the form in full; typing before the form
+    // hydrates would then be lost, so wait for the page to finish loading.
+    await page.waitForURL("**/replace", { waitUntil: "load" });
     await page.getByLabel("Reason").fill("Rated below the relief setting");
     await page.locator('input[name="spec.standard"]').fill("SAE 100R2AT");
     await page.locator('input[name="spec.ratedPressureBar"]').fill("276");

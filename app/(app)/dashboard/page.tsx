@@ -8,6 +8,7 @@ import { RoleBadge } from "@/components/ui/role-badge";
 import { requireShopContext } from "@/lib/auth/current";
 import { listShopStatuses } from "@/lib/data/press-status";
 import { listPresses } from "@/lib/data/presses";
+import { listDueForActor as listInspectionsDue } from "@/lib/data/inspection-due";
 import { listDueForActor } from "@/lib/data/service-due";
 import { LIFECYCLE_LABELS } from "@/lib/press-labels";
 
@@ -21,7 +22,14 @@ export default async function DashboardPage() {
     listDueForActor(actor, { shopId: shop.id }),
     listShopStatuses(actor, shop.id),
   ]);
-  const dueRows: DueRow[] = due.map((d) => ({ key: `${d.kind}:${d.taskId}`, kind: d.kind, title: d.title, pressName: d.pressName, href: `/presses/${d.pressId}#service`, state: d.state, dueDate: d.dueDate, dueHours: d.dueHours }));
+  const inspectionsDue = await listInspectionsDue(actor, presses.map((p) => p.id));
+  const pressNames = new Map(presses.map((p) => [p.id, p.name]));
+  const dueRows: DueRow[] = [
+    ...due.map((d) => ({ key: `${d.kind}:${d.taskId}`, kind: d.kind, title: d.title, pressName: d.pressName, href: `/presses/${d.pressId}#service`, state: d.state, dueDate: d.dueDate, dueHours: d.dueHours })),
+    ...[...inspectionsDue].flatMap(([pressId, items]) =>
+      items.map((i) => ({ key: `inspection:${pressId}:${i.templateId}`, kind: "inspection" as const, title: i.name, pressName: pressNames.get(pressId), href: `/presses/${pressId}#inspections`, state: i.state, dueDate: i.dueAt, dueHours: null })),
+    ),
+  ].sort((a, b) => Number(b.state === "overdue") - Number(a.state === "overdue") || (a.dueDate?.getTime() ?? Infinity) - (b.dueDate?.getTime() ?? Infinity));
   const byLifecycle = Object.entries(LIFECYCLE_LABELS).map(([key, label]) => ({
     label,
     count: presses.filter((p) => p.lifecycle === key).length,

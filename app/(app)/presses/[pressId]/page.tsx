@@ -1,5 +1,6 @@
 import type { Metadata } from "next";
 import Link from "next/link";
+import { PressInspectionsPanel } from "@/components/inspection/press-inspections-panel";
 import { AsBuiltPanel } from "@/components/press/as-built-panel";
 import { ComponentTable } from "@/components/press/component-table";
 import { FreshSWR } from "@/components/ui/fresh-swr";
@@ -7,14 +8,22 @@ import { PressPhotos } from "@/components/photos/press-photos";
 import { HourCorrectionForm, HourMeterForm } from "@/components/press/hour-meter-form";
 import { PressTimeline } from "@/components/press/press-timeline";
 import { PressService } from "@/components/service/press-service";
+import { TagOutPanel } from "@/components/press/tag-out-panel";
 import { SafetyCautions } from "@/components/sizing/safety-cautions";
 import { buttonClass } from "@/components/ui/button";
 import { Card, PageTitle } from "@/components/ui/card";
 import { showQuantity as show } from "@/components/ui/quantity";
 import { orPageError, requireShopContext } from "@/lib/auth/current";
-import { can, canEditPress } from "@/lib/auth/permissions";
+import { can, canEditPress, inspectionAction } from "@/lib/auth/permissions";
 import { listComponents } from "@/lib/data/components";
+import { listDueForActor } from "@/lib/data/inspection-due";
+import { listPressInspections } from "@/lib/data/inspection-lists";
+import { verifyPressChain } from "@/lib/data/inspection-sign";
+import { listTemplates } from "@/lib/data/inspection-templates";
 import { listHourReadings } from "@/lib/data/press-edits";
+import { listClearedTagOuts, listPressTagOuts } from "@/lib/data/press-tag-outs";
+import { SigningUnavailableError } from "@/lib/inspections/chain-key";
+import { CADENCE_LABELS } from "@/lib/inspections/labels";
 import { getPress } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import { evaluateAsBuilt } from "@/lib/press/as-built";
@@ -32,16 +41,27 @@ export const metadata: Metadata = { title: "Press" };
 
 export default async function PressPage({ params }: { params: Promise<{ pressId: string }> }) {
   const { pressId } = await params;
-  const { user } = await requireShopContext();
+  const { user, shop } = await requireShopContext();
   const actor = { userId: user.id };
   const press = await orPageError(getPress(actor, pressId));
-  const [all, readings, status, problems, timeZone] = await Promise.all([
+  const [all, readings, status, problems, timeZone, tagOuts, cleared, due, recent, chain, templates] = await Promise.all([
     listComponents(actor, pressId, { includeRemoved: true }),
     listHourReadings(actor, pressId),
     getPressStatus(actor, pressId),
     listProblems(actor, pressId),
     getPressTimeZone(actor, pressId),
+    listPressTagOuts(actor, pressId),
+    listClearedTagOuts(actor, pressId),
+    listDueForActor(actor, [pressId]),
+    listPressInspections(actor, pressId, { limit: 5 }),
+    // Without a chain key (misconfigured production) the page still shows, without the check.
+    verifyPressChain(actor, pressId).catch((error: unknown) => {
+      if (error instanceof SigningUnavailableError) return null;
+      throw error;
+    }),
+    listTemplates(actor, press.shopId),
   ]);
+  const startable = press.lifecycle === "retired" ? [] : templates.filter((t) => can(press.role, inspectionAction(t.signerRole, "perform")));
   const installed = all.filter((c) => !c.removedOn);
   const units = user.unitSystem;
   const asBuilt = evaluateAsBuilt(press, installed, units);
@@ -93,6 +113,8 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
           {[
             ["#status", "Status"],
             ["#problems", "Problems"],
+            ["#tag-out", "Tag-out"],
+            ["#inspections", "Inspections"],
             ["#as-built", "As-built check"],
             ["#components", "Parts"],
             ["#service", "Service"],
@@ -136,6 +158,23 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
               <StatusBadge status={status} />
               <StatusReasons status={status} />
             </div>
+          </Card>
+        </div>
+        <div id="tag-out">
+          <Card title="Tag-out">
+            <TagOutPanel pressId={pressId} open={tagOuts} cleared={cleared} canManage={can(press.role, "clearTagOut")} timeZone={shop.timeZone} />
+          </Card>
+        </div>
+        <div id="inspections">
+          <Card title="Inspections">
+            <PressInspectionsPanel
+              pressId={pressId}
+              due={due.get(pressId) ?? []}
+              recent={recent}
+              chain={chain}
+              templates={startable.map((t) => ({ value: t.id, label: `${t.name} (${CADENCE_LABELS[t.cadence]})` }))}
+              timeZone={shop.timeZone}
+            />
           </Card>
         </div>
         <Card title="Overview">
