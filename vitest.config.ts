@@ -14,6 +14,8 @@ export default defineConfig({
           name: "unit",
           include: ["tests/unit/**/*.test.{ts,tsx}"],
           environment: "node",
+          // Rendering the whole sizing calculator in jsdom takes seconds on a busy 2-core machine.
+          testTimeout: 20_000,
           setupFiles: ["tests/unit/setup.ts"],
         },
       },
