@@ -26,6 +26,8 @@ async function startFromPress(page: Page, pressName: string, checklist: string):
   await page.locator("#inspections").getByLabel("Checklist").selectOption({ label: checklist });
   await page.locator("#inspections").getByRole("button", { name: "Start inspection" }).click();
   await page.waitForURL(/\/inspections\/[a-z2-7]{24}\/run$/);
+  // The page streams in after its loading state: wait for the checklist itself.
+  await page.getByRole("button", { name: "Sign this inspection" }).waitFor();
   return /\/inspections\/([a-z2-7]{24})\/run$/.exec(page.url())![1]!;
 }
 
