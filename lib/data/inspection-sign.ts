@@ -1,4 +1,5 @@
 import "server-only";
+import { appUrl } from "@/lib/app-url";
 import { and, asc, desc, eq, gt, inArray, isNotNull } from "drizzle-orm";
 import { db } from "@/db/client";
 import { inspectionAnswers, inspections, memberships, photos, presses, shops, users } from "@/db/schema";
@@ -17,10 +18,6 @@ import { notifyHoldersOfTagOut } from "./bookings";
 import { clearOpenTagOuts, insertTagOut } from "./tag-outs";
 
 export type SignOutcome = { id: string; result: "pass" | "fail"; chainSeq: number; chainHash: string; taggedOut: boolean; clearedTagOuts: number };
-
-function appOrigin(): string {
-  return (process.env.APP_URL ?? `http://127.0.0.1:${process.env.PORT ?? 3000}`).replace(/\/$/, "");
-}
 
 /**
  * Signs an inspection: every item answered, a note on every failure, a photo where the item asks
@@ -113,7 +110,7 @@ async function queueTagOutAlerts(executor: Executor, input: SignedRecord & { sho
     signerName: input.signerName,
     signedAt: input.signedAt,
     failed: input.failed,
-    link: `${appOrigin()}/inspections/${input.id}`,
+    link: appUrl(`/inspections/${input.id}`),
   });
   for (const m of managers) {
     await enqueueEmail(executor, { kind: "tag-out-alert", to: m.email, shopId: input.shopId, ...message, dedupeKey: `tag-out-alert:${input.id}:${m.id}` });

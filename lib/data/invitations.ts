@@ -5,7 +5,7 @@ import { invitations, memberships, shops, users } from "@/db/schema";
 import { linkSecretMatches, newLinkToken, parseLinkToken } from "@/lib/auth/link-token";
 import { assertCan, NotFoundError, type Role } from "@/lib/auth/permissions";
 import { normaliseEmail } from "@/lib/auth/sign-in";
-import { appLink } from "@/lib/email/links";
+import { appUrl } from "@/lib/app-url";
 import { invitationEmail } from "@/lib/email/messages/invitation";
 import { enqueueEmail } from "@/lib/email/outbox";
 import { ConflictError } from "@/lib/errors";
@@ -43,7 +43,7 @@ async function sendInvitation(tx: Executor, actor: Actor, invitation: { id: stri
     shopName: info?.shopName ?? "a shop",
     inviterName: info?.inviterName ?? "A manager",
     role: invitation.role,
-    link: appLink(`/invite/${invitation.id}.${secret}`, origin),
+    link: appUrl(`/invite/${invitation.id}.${secret}`, origin),
     expiresInDays: INVITATION_DAYS,
   });
   await enqueueEmail(tx, { kind: "invitation", to: invitation.email, shopId: invitation.shopId, ...message });

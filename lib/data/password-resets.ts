@@ -6,7 +6,7 @@ import { newLinkToken, linkSecretMatches, parseLinkToken } from "@/lib/auth/link
 import { hashPassword } from "@/lib/auth/password";
 import { normaliseEmail } from "@/lib/auth/sign-in";
 import { enqueueEmail } from "@/lib/email/outbox";
-import { appLink } from "@/lib/email/links";
+import { appUrl } from "@/lib/app-url";
 import { passwordResetEmail } from "@/lib/email/messages/password-reset";
 import { recordAudit } from "./audit";
 import type { Executor } from "./press-access";
@@ -36,7 +36,7 @@ export async function requestPasswordReset(emailInput: string, origin: string | 
       .limit(1);
     const { id, token, secretHash } = newLinkToken();
     await tx.insert(passwordResets).values({ id, userId: user.id, secretHash, createdAt: now, expiresAt: new Date(now.getTime() + RESET_LIFETIME_MS) });
-    const message = passwordResetEmail({ shopName: shop?.name ?? "Presswright", link: appLink(`/reset-password/${token}`, origin), expiresInMinutes: RESET_LIFETIME_MS / 60_000 });
+    const message = passwordResetEmail({ shopName: shop?.name ?? "Presswright", link: appUrl(`/reset-password/${token}`, origin), expiresInMinutes: RESET_LIFETIME_MS / 60_000 });
     await enqueueEmail(tx, { kind: "password-reset", to: email, ...message });
   });
 }

@@ -2,7 +2,7 @@ import "server-only";
 import { and, asc, eq, gt } from "drizzle-orm";
 import { db } from "@/db/client";
 import { memberships, presses, shops, users } from "@/db/schema";
-import { appLink } from "@/lib/email/links";
+import { appUrl } from "@/lib/app-url";
 import { reminderDigestEmail } from "@/lib/email/messages/reminder-digest";
 import { enqueueEmail } from "@/lib/email/outbox";
 import { localDate } from "@/lib/schedule";
@@ -40,7 +40,7 @@ export async function queueReminderDigests(now = new Date()): Promise<ReminderRe
         })),
       );
       lines.sort((a, b) => Number(b.state === "overdue") - Number(a.state === "overdue"));
-      const message = reminderDigestEmail({ shopName: shop.name, lines, link: appLink("/dashboard") });
+      const message = reminderDigestEmail({ shopName: shop.name, lines, link: appUrl("/dashboard") });
       const managers = await db
         .select({ userId: users.id, email: users.email })
         .from(memberships)
