@@ -86,6 +86,17 @@ describe("inspections", () => {
     expect(await page.getByTestId("inspection-record").textContent()).toContain("Two tie-rod nuts turned by hand");
     await page.emulateMedia({ media: "print" });
     await screenshot(page, "inspection-print");
+    await page.emulateMedia({ media: "screen" });
+
+    // The nuts are re-torqued: the inspector clears the tag-out with a recorded reason.
+    await page.goBack();
+    await page.getByRole("link", { name: "Bay 1 H-frame" }).click();
+    await page.waitForURL(/\/presses\/[a-z2-7]{24}$/);
+    const tagOuts = page.getByTestId("tag-out-panel");
+    await tagOuts.getByLabel("Why it is safe again").fill("Tie-rod nuts re-torqued to spec and checked");
+    await tagOuts.getByRole("button", { name: "Clear tag-out" }).click();
+    await expect.poll(() => tagOuts.textContent()).toContain("Not tagged out.");
+    expect(await tagOuts.textContent()).toContain("Tie-rod nuts re-torqued to spec and checked");
     await context.close();
   });
 

@@ -9,6 +9,8 @@ import { waitForMessage } from "../integration/mail";
 import { launchBrowser, newPage, screenshot, signIn } from "./browser";
 
 let browser: Browser;
+/** The press's status before the stop-use report (the second test expects it back). */
+let initialStatus = "";
 beforeAll(async () => {
   browser = await launchBrowser();
 });
@@ -36,7 +38,9 @@ describe("shared shop: status page, booking, stop-use report", () => {
 
     await tess.page.goto(statusPath);
     await tess.page.getByRole("heading", { level: 1, name: "Bay 1 H-frame" }).waitFor();
-    await expect(tess.page.locator("[data-status]").first().getAttribute("data-status")).resolves.toBe("ready");
+    // Whatever the demo's service and inspection dates make of it, the press is usable: not tagged out.
+    initialStatus = (await tess.page.locator("[data-status]").first().getAttribute("data-status")) ?? "";
+    expect(["ready", "service-due", "inspection-overdue"]).toContain(initialStatus);
     await tess.page.getByTestId("free-slots").waitFor();
     await screenshot(tess.page, "shared-shop-status-ready-phone");
 
@@ -103,7 +107,7 @@ describe("shared shop: status page, booking, stop-use report", () => {
     expect(notices.map((n) => n.to)).toEqual(expect.arrayContaining(["tess@millrace-forge.example", "owen@millrace-forge.example"]));
   });
 
-  it("lets the manager close the report, which puts the press back to ready", async () => {
+  it("lets the manager close the report, which puts the press back to its status before the report", async () => {
     const dana = await newPage(browser);
     await signIn(dana.page, "dana@millrace-forge.example");
     await dana.page.goto("/dashboard");
@@ -115,7 +119,7 @@ describe("shared shop: status page, booking, stop-use report", () => {
     // The closed report leaves the open list as the page re-renders.
     await dana.page.getByText("No open problem reports.").waitFor();
     await dana.page.reload();
-    await expect(dana.page.getByTestId("press-status").locator("[data-status]").getAttribute("data-status")).resolves.toBe("ready");
+    await expect(dana.page.getByTestId("press-status").locator("[data-status]").getAttribute("data-status")).resolves.toBe(initialStatus);
     await dana.page.goto("/bookings");
     await dana.page.getByTestId("week-view").waitFor();
     await screenshot(dana.page, "shared-shop-bookings");
