@@ -74,6 +74,7 @@ describe("inspections", () => {
 
     await page.getByRole("link", { name: "Bay 1 H-frame" }).click();
     await page.waitForURL(/\/presses\/[a-z2-7]{24}$/);
+    const pressUrl = page.url();
     const panel = await page.getByTestId("tag-out-panel").textContent();
     expect(panel).toContain("Tagged out");
     expect(panel).toContain("Bolts and tie-rod nuts tight");
@@ -89,9 +90,7 @@ describe("inspections", () => {
     await page.emulateMedia({ media: "screen" });
 
     // The nuts are re-torqued: the inspector clears the tag-out with a recorded reason.
-    await page.goBack();
-    await page.getByRole("link", { name: "Bay 1 H-frame" }).click();
-    await page.waitForURL(/\/presses\/[a-z2-7]{24}$/);
+    await page.goto(pressUrl);
     const tagOuts = page.getByTestId("tag-out-panel");
     await tagOuts.getByLabel("Why it is safe again").fill("Tie-rod nuts re-torqued to spec and checked");
     await tagOuts.getByRole("button", { name: "Clear tag-out" }).click();
