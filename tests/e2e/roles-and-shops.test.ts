@@ -56,6 +56,10 @@ describe("roles in the demo workshop", () => {
     // The choice is remembered for the next visit.
     await page.goto("/shop");
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Ravi Lindqvist's shop");
+    // Switch back: the choice is stored on the account, and other journeys sign in as Ravi too.
+    await page.locator("summary", { hasText: "Switch shop" }).click();
+    await page.getByRole("button", { name: /Millrace Community Forge/ }).click();
+    await page.getByRole("heading", { level: 1, name: "Millrace Community Forge" }).waitFor();
     await context.close();
   });
 });
