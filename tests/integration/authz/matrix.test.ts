@@ -13,6 +13,7 @@ import { changeMemberRole, removeMember, updateOpeningHours, updateShop } from "
 import { regenerateStatusToken } from "@/lib/data/status-page";
 import { plannedPressSchema } from "@/lib/validation/planned-press";
 import { LOCAL_UPLOADTHING_PORT, localUploadthingEnv } from "@/lib/uploads/env";
+import { FULL_SIZING_INPUT } from "../../fixtures/sizing-inputs";
 import { makeUser } from "../helpers";
 import { ACTIONS, JOBS_TEST_SECRET, ROUTES, rowKey, type DataCell, type Outcome, type RouteRow } from "./matrix";
 import { outcomeOf, routeFiles, routeHandlers, send, serverActionExports } from "./run";
@@ -96,12 +97,11 @@ const DATA: Record<DataCell, { own: Record<ShopRole, Outcome>; run: (actor: { us
   createPlannedPressFromSizing: {
     own: manager(),
     run: (actor, s) => {
-      const { sizingInput, ...plan } = plannedPressSchema.parse({ name: "Matrix planned", frameType: "h-frame", sizingInput: JSON.stringify(PLANNED_SIZING) });
+      const { sizingInput, ...plan } = plannedPressSchema.parse({ name: "Matrix planned", frameType: "h-frame", sizingInput: JSON.stringify(FULL_SIZING_INPUT) });
       return createPlannedPressFromSizing(actor, s.shopId, { ...plan, input: sizingInput });
     },
   },
 };
-const PLANNED_SIZING = { cylinders: { count: 1, boreMm: 101.6, rodMm: 50.8, strokeMm: 300 }, pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 9, unloadBar: 40 }, pressureBar: 172, reliefBar: 180 };
 
 function manager(): Record<ShopRole, Outcome> {
   return { manager: "2xx", inspector: "403", member: "403" };

@@ -9,6 +9,7 @@
 // request (401). "user" rows act on the caller's own data only: any signed-in user 2xx, signed-out
 // 401. "public" rows list their own cases.
 import { photoFileUrl } from "@/lib/photos/file-urls";
+import { FULL_SIZING_INPUT } from "../../fixtures/sizing-inputs";
 import { getInspection } from "@/lib/data/inspections";
 import { createSession } from "@/lib/auth/session";
 import { JOB_SECRET_HEADER } from "@/lib/email/jobs";
@@ -42,15 +43,6 @@ const MANAGER_INSPECTOR: Record<ShopRole, Outcome> = { manager: "2xx", inspector
 /** Objects held or uploaded by the member: the holder/uploader, or a manager. */
 const HOLDER_OR_MANAGER: Record<ShopRole, Outcome> = { manager: "2xx", inspector: "403", member: "2xx" };
 
-const GOOD_SIZING = {
-  cylinders: { count: 1, boreMm: 101.6, rodMm: 50.8, strokeMm: 300 },
-  pump: { kind: "two-stage", approachFlowLpm: 40, pressingFlowLpm: 9, unloadBar: 40 },
-  pressureBar: 172.368932,
-  reliefBar: 180,
-  motorKw: 5.5,
-  pressDistanceMm: 50,
-  ratings: { hoseBar: 150 },
-};
 export const JOBS_TEST_SECRET = "matrix-jobs-secret-0123456789";
 
 const press = (shop: Shop, tail = ""): Call => ({ path: `/api/presses/${shop.pressId}${tail}`, params: { pressId: shop.pressId } });
@@ -81,8 +73,8 @@ export const ROUTES: RouteRow[] = [
   {
     file: "app/api/sizing/route.ts", method: "POST", scope: "public", rule: "anyone, rate-limited per address; reads no cookie",
     cases: [
-      { name: "signed out", expect: "2xx", call: async () => ({ path: "/api/sizing", body: GOOD_SIZING, session: false }) },
-      { name: "signed in", expect: "2xx", call: async () => ({ path: "/api/sizing", body: GOOD_SIZING }) },
+      { name: "signed out", expect: "2xx", call: async () => ({ path: "/api/sizing", body: FULL_SIZING_INPUT, session: false }) },
+      { name: "signed in", expect: "2xx", call: async () => ({ path: "/api/sizing", body: FULL_SIZING_INPUT }) },
     ],
   },
   {
