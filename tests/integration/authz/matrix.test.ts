@@ -16,7 +16,8 @@ import { LOCAL_UPLOADTHING_PORT, localUploadthingEnv } from "@/lib/uploads/env";
 import { FULL_SIZING_INPUT } from "../../fixtures/sizing-inputs";
 import { makeUser } from "../helpers";
 import { ACTIONS, JOBS_TEST_SECRET, ROUTES, rowKey, type DataCell, type Outcome, type RouteRow } from "./matrix";
-import { outcomeOf, routeFiles, routeHandlers, send, serverActionExports } from "./run";
+import { routeFiles } from "../../app-files";
+import { outcomeOf, routeHandlers, send, serverActionExports } from "./run";
 import { freshComponent, freshPress, makeWorld, ROLES, type Shop, type ShopRole } from "./world";
 
 // Stored photo files live in the upload service; the matrix is about who may reach them, not storage.

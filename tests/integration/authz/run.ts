@@ -1,29 +1,17 @@
 // Shared by the matrix and CSRF tests: finding every route and action on disk, loading a route's
 // handlers, and sending one Call to a handler the way a browser on the app's own page would.
-import { readdirSync, readFileSync } from "node:fs";
+import { readFileSync } from "node:fs";
 import path from "node:path";
 import { NextRequest } from "next/server";
+import { projectFiles, ROOT } from "../../app-files";
 import type { Call, Method, Outcome } from "./matrix";
 
-export const ROOT = path.resolve(__dirname, "../../..");
 export const ORIGIN = "http://127.0.0.1:3000";
 const HTTP_METHODS = ["GET", "HEAD", "OPTIONS", "POST", "PUT", "PATCH", "DELETE"] as const;
 
-function walk(dir: string): string[] {
-  return readdirSync(dir, { withFileTypes: true }).flatMap((e) => {
-    const full = path.join(dir, e.name);
-    return e.isDirectory() ? (e.name === "node_modules" ? [] : walk(full)) : [full];
-  });
-}
-
-const appFiles = (): string[] => walk(path.join(ROOT, "app")).map((f) => path.relative(ROOT, f).split(path.sep).join("/"));
-
-/** Every app/**\/route.ts. */
-export const routeFiles = (): string[] => appFiles().filter((f) => f.endsWith("/route.ts")).sort();
-
 /** Every exported function name of every "use server" file under app/ and lib/. */
 export function serverActionExports(): { file: string; name: string }[] {
-  const files = [...appFiles(), ...walk(path.join(ROOT, "lib")).map((f) => path.relative(ROOT, f).split(path.sep).join("/"))].filter((f) => /\.tsx?$/.test(f));
+  const files = [...projectFiles("app"), ...projectFiles("lib")].filter((f) => /\.tsx?$/.test(f));
   return files.flatMap((file) => {
     const text = readFileSync(path.join(ROOT, file), "utf8");
     if (!/^\s*["']use server["']/.test(text.replace(/^(\s*\/\/.*\n|\s*\/\*[\s\S]*?\*\/\s*\n)*/, ""))) return [];
