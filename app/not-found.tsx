@@ -1,7 +1,15 @@
 import Link from "next/link";
+import { connection } from "next/server";
 import { buttonClass } from "@/components/ui/button";
 
-export default function NotFound() {
+/**
+ * Rendered per request, not prerendered at build time: the CSP (proxy.ts) allows only scripts
+ * carrying this request's nonce, and a page built ahead of time has no nonce, so the browser would
+ * block its inline scripts. Pages that answer 404 at build time (e.g. /dev/outbox outside
+ * development) get this page too.
+ */
+export default async function NotFound() {
+  await connection();
   return (
     <div className="mx-auto max-w-lg px-4 py-16 text-center">
       <p className="font-mono text-sm font-semibold text-oil-600">404</p>
