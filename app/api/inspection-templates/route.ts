@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { z } from "zod";
 import { createTemplate, listTemplates } from "@/lib/data/inspection-templates";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { ID_PATTERN } from "@/lib/ids";
 import { templateInputSchema } from "@/lib/validation/inspection";
 
@@ -18,6 +18,6 @@ export const GET = apiRoute(async (req: NextRequest) => {
 export const POST = apiRoute(async (req: NextRequest) => {
   const current = await requireApiSession(req);
   const { shopId } = shopQuery.parse(Object.fromEntries(req.nextUrl.searchParams));
-  const input = templateInputSchema.parse(await req.json().catch(() => null));
+  const input = templateInputSchema.parse(await readJsonBody(req));
   return NextResponse.json(await createTemplate({ userId: current.user.id }, shopId, input), { status: 201 });
 });

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getTemplate, updateTemplate } from "@/lib/data/inspection-templates";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { templateInputSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ templateId: string }> };
@@ -16,7 +16,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const PUT = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { templateId } = await params;
-  const input = templateInputSchema.parse(await req.json().catch(() => null));
+  const input = templateInputSchema.parse(await readJsonBody(req));
   await updateTemplate({ userId: current.user.id }, templateId, input);
   return NextResponse.json({ ok: true });
 });

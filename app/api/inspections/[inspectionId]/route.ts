@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getInspection, updateAnswers } from "@/lib/data/inspections";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { answerPatchSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ inspectionId: string }> };
@@ -18,6 +18,6 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { inspectionId } = await params;
-  const patch = answerPatchSchema.parse(await req.json().catch(() => null));
+  const patch = answerPatchSchema.parse(await readJsonBody(req));
   return NextResponse.json(await updateAnswers({ userId: current.user.id }, inspectionId, patch));
 });

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { closeProblem } from "@/lib/data/problems";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { problemCloseSchema } from "@/lib/validation/shop-use";
 
 type Context = { params: Promise<{ problemId: string }> };
@@ -9,7 +9,7 @@ type Context = { params: Promise<{ problemId: string }> };
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { problemId } = await params;
-  const input = problemCloseSchema.parse(await req.json().catch(() => null));
+  const input = problemCloseSchema.parse(await readJsonBody(req));
   await closeProblem({ userId: current.user.id }, problemId, input);
   return NextResponse.json({ ok: true });
 });

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getServiceEntry, listServiceRevisions, updateServiceEntry } from "@/lib/data/service-log";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { serviceEntryPatchSchema } from "@/lib/validation/service";
 
 type Context = { params: Promise<{ entryId: string }> };
@@ -18,7 +18,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const PATCH = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { entryId } = await params;
-  const patch = serviceEntryPatchSchema.parse(await req.json().catch(() => null));
+  const patch = serviceEntryPatchSchema.parse(await readJsonBody(req));
   await updateServiceEntry({ userId: current.user.id }, entryId, patch);
   return NextResponse.json({ ok: true });
 });

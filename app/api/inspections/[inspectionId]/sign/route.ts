@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { signInspection } from "@/lib/data/inspection-sign";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, readBodyText, requireApiSession } from "@/lib/http";
 import { signInspectionSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ inspectionId: string }> };
@@ -12,8 +12,15 @@ type Context = { params: Promise<{ inspectionId: string }> };
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { inspectionId } = await params;
-  const text = await req.text();
-  signInspectionSchema.parse(text ? await Promise.resolve(text).then(JSON.parse).catch(() => null) : {});
+  // An empty body is allowed (nothing to send); anything else must be the (empty) JSON object.
+  const text = await readBodyText(req);
+  let body: unknown = null;
+  try {
+    body = text ? JSON.parse(text) : {};
+  } catch {
+    body = null;
+  }
+  signInspectionSchema.parse(body);
   const outcome = await signInspection({ userId: current.user.id, signedInAt: current.session.createdAt }, inspectionId);
   return NextResponse.json(outcome);
 });

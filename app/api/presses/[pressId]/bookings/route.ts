@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { createBooking, listPressBookings } from "@/lib/data/bookings";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { bookingInputSchema, bookingWindowSchema } from "@/lib/validation/shop-use";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -22,7 +22,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const slot = bookingInputSchema.parse(await req.json().catch(() => null));
+  const slot = bookingInputSchema.parse(await readJsonBody(req));
   const booking = await createBooking({ userId: current.user.id }, pressId, slot);
   return NextResponse.json(booking, { status: 201, headers: { location: `/api/bookings/${booking.id}` } });
 });

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { listPressInspections } from "@/lib/data/inspection-lists";
 import { startInspection } from "@/lib/data/inspections";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { pageQuerySchema, startInspectionSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -18,7 +18,7 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const { templateId } = startInspectionSchema.parse(await req.json().catch(() => null));
+  const { templateId } = startInspectionSchema.parse(await readJsonBody(req));
   const { id } = await startInspection({ userId: current.user.id }, pressId, templateId);
   return NextResponse.json({ id }, { status: 201, headers: { Location: `/api/inspections/${id}` } });
 });

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { listProblems, reportProblem } from "@/lib/data/problems";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { problemInputSchema } from "@/lib/validation/shop-use";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -16,6 +16,6 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const input = problemInputSchema.parse(await req.json().catch(() => null));
+  const input = problemInputSchema.parse(await readJsonBody(req));
   return NextResponse.json(await reportProblem({ userId: current.user.id }, pressId, input), { status: 201 });
 });

@@ -1,7 +1,7 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { getPress } from "@/lib/data/presses";
 import { createServiceEntry, listServiceEntries } from "@/lib/data/service-log";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { serviceLogCsv } from "@/lib/service/exports";
 import { serviceEntryInputSchema, serviceLogQuerySchema } from "@/lib/validation/service";
 
@@ -34,6 +34,6 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const input = serviceEntryInputSchema.parse(await req.json().catch(() => null));
+  const input = serviceEntryInputSchema.parse(await readJsonBody(req));
   return NextResponse.json(await createServiceEntry({ userId: current.user.id }, pressId, input), { status: 201 });
 });

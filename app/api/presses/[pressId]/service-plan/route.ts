@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { applyStartingPlan, createServiceTask, getServicePlan } from "@/lib/data/service-plan";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { parsePlanPost } from "@/lib/validation/service";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -17,7 +17,7 @@ export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const actor = { userId: current.user.id };
   const { pressId } = await params;
-  const body = parsePlanPost(await req.json().catch(() => null));
+  const body = parsePlanPost(await readJsonBody(req));
   const result = "startingPlan" in body ? await applyStartingPlan(actor, pressId) : await createServiceTask(actor, pressId, body);
   return NextResponse.json(result, { status: 201 });
 });

@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { listPressTagOuts, tagOutPressByHand } from "@/lib/data/press-tag-outs";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { tagOutReasonSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ pressId: string }> };
@@ -16,6 +16,6 @@ export const GET = apiRoute(async (req: NextRequest, { params }: Context) => {
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { pressId } = await params;
-  const { reason } = tagOutReasonSchema.parse(await req.json().catch(() => null));
+  const { reason } = tagOutReasonSchema.parse(await readJsonBody(req));
   return NextResponse.json(await tagOutPressByHand({ userId: current.user.id }, pressId, reason), { status: 201 });
 });

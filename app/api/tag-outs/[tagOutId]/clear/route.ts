@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { clearTagOut } from "@/lib/data/press-tag-outs";
-import { apiRoute, requireApiSession } from "@/lib/http";
+import { apiRoute, requireApiSession, readJsonBody } from "@/lib/http";
 import { tagOutReasonSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ tagOutId: string }> };
@@ -9,6 +9,6 @@ type Context = { params: Promise<{ tagOutId: string }> };
 export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const current = await requireApiSession(req);
   const { tagOutId } = await params;
-  const { reason } = tagOutReasonSchema.parse(await req.json().catch(() => null));
+  const { reason } = tagOutReasonSchema.parse(await readJsonBody(req));
   return NextResponse.json(await clearTagOut({ userId: current.user.id }, tagOutId, reason));
 });
