@@ -5,7 +5,8 @@
  * daylight-saving change moves no due date, and a month end is just another date.
  */
 import { TZDate } from "@date-fns/tz";
-import { addDays, differenceInCalendarDays, format } from "date-fns";
+import { addDays, differenceInCalendarDays } from "date-fns";
+import { localDate } from "./time-zone";
 
 export type IntervalTask = {
   intervalDays: number | null;
@@ -47,10 +48,8 @@ function isoOf(calendarDate: Date): string {
   return calendarDate.toISOString().slice(0, 10);
 }
 
-/** The local date (YYYY-MM-DD) of an instant in a time zone. */
-export function localDate(instant: Date, timeZone: string): string {
-  return format(new TZDate(instant.getTime(), timeZone), "yyyy-MM-dd");
-}
+// The local date of an instant has one implementation, with the other zone conversions.
+export { localDate };
 
 /** The instant a local date begins in a time zone (handles zones whose offset changes that day). */
 export function startOfLocalDay(isoDate: string, timeZone: string): Date {

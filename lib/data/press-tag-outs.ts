@@ -6,7 +6,7 @@ import { NotFoundError } from "@/lib/auth/permissions";
 import type { Actor } from "./actor";
 import { notifyHoldersOfTagOut } from "./bookings";
 import { pressAccess } from "./press-access";
-import { clearOpenTagOuts, insertTagOut, listOpenTagOuts, type OpenTagOut } from "./tag-outs";
+import { clearOpenTagOuts, insertTagOut, listOpenTagOuts, TAG_OUT_COLUMNS, type OpenTagOut } from "./tag-outs";
 
 export type TagOutView = OpenTagOut & { taggedByName: string | null };
 export type ClearedTagOutView = TagOutView & { clearedAt: Date; clearReason: string | null; clearedByName: string | null };
@@ -34,12 +34,7 @@ export async function listClearedTagOuts(actor: Actor, pressId: string, limit = 
   await pressAccess(db, actor, pressId, "viewPress");
   const rows = await db
     .select({
-      id: pressTagOuts.id,
-      pressId: pressTagOuts.pressId,
-      source: pressTagOuts.source,
-      sourceId: pressTagOuts.sourceId,
-      reason: pressTagOuts.reason,
-      taggedAt: pressTagOuts.taggedAt,
+      ...TAG_OUT_COLUMNS,
       clearedAt: pressTagOuts.clearedAt,
       clearReason: pressTagOuts.clearReason,
       clearedByName: users.displayName,

@@ -4,6 +4,16 @@ import { pressTagOuts, type TagOutSource } from "@/db/schema";
 import { newId } from "@/lib/ids";
 import type { Executor } from "./press-access";
 
+/** The columns of a tag-out as the app shows it (shared by the open and cleared lists). */
+export const TAG_OUT_COLUMNS = {
+  id: pressTagOuts.id,
+  pressId: pressTagOuts.pressId,
+  source: pressTagOuts.source,
+  sourceId: pressTagOuts.sourceId,
+  reason: pressTagOuts.reason,
+  taggedAt: pressTagOuts.taggedAt,
+};
+
 export type OpenTagOut = { id: string; pressId: string; source: TagOutSource; sourceId: string | null; reason: string; taggedAt: Date };
 
 /*
@@ -53,14 +63,7 @@ export async function listOpenTagOuts(executor: Executor, pressIds: readonly str
   const byPress = new Map<string, OpenTagOut[]>();
   if (pressIds.length === 0) return byPress;
   const rows = await executor
-    .select({
-      id: pressTagOuts.id,
-      pressId: pressTagOuts.pressId,
-      source: pressTagOuts.source,
-      sourceId: pressTagOuts.sourceId,
-      reason: pressTagOuts.reason,
-      taggedAt: pressTagOuts.taggedAt,
-    })
+    .select(TAG_OUT_COLUMNS)
     .from(pressTagOuts)
     .where(and(inArray(pressTagOuts.pressId, [...pressIds]), isNull(pressTagOuts.clearedAt)))
     .orderBy(asc(pressTagOuts.taggedAt));
