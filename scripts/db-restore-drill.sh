@@ -22,19 +22,7 @@ dump="${2:-}"
 check_db_name "$db"
 [[ "$db" != "$SCRATCH_DB" ]] || die "cannot drill against the scratch database itself."
 require_running
-command -v gzip >/dev/null 2>&1 || die "'gzip' not found; install gzip."
-
-if [[ -z "$dump" ]]; then
-  # Names end in a fixed-width UTC timestamp, so the last in glob order is newest.
-  shopt -s nullglob
-  dumps=("$DB_BACKUP_DIR/$db"-[0-9]*T[0-9]*Z.sql.gz)
-  shopt -u nullglob
-  (( ${#dumps[@]} > 0 )) \
-    || die "no backups of '$db' in $DB_BACKUP_DIR. Create one with: bash scripts/db-backup.sh $db"
-  dump="${dumps[-1]}"
-fi
-[[ -r "$dump" ]] || die "cannot read dump file '$dump'."
-gzip -t "$dump" || die "dump '$dump' is corrupt (gzip integrity check failed)."
+dump="$(pick_dump "$db" "$dump")"
 
 q() { db_client --batch --skip-column-names -e "$1"; }
 

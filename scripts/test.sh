@@ -48,7 +48,16 @@ vitest_project() {
 
 SERVER_PID=""
 stop_server() { if [[ -n "$SERVER_PID" ]]; then kill "$SERVER_PID" 2>/dev/null || true; wait "$SERVER_PID" 2>/dev/null || true; fi; }
-trap stop_server EXIT
+# The drill, fault and instance tests run their own MariaDB servers (tests/scratch-mariadb.ts) and
+# stop them themselves; this catches any a crashed or interrupted test left running.
+stop_scratch_servers() {
+  local dir
+  for dir in "$ROOT"/.data/scratch-*/; do
+    [[ -d "$dir" ]] && DB_DATA_DIR="$dir" bash scripts/db.sh stop >/dev/null 2>&1 || true
+  done
+}
+cleanup() { stop_server; stop_scratch_servers; }
+trap cleanup EXIT
 
 browser_tests() {
   fresh_test_database

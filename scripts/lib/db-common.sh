@@ -10,7 +10,10 @@
 # Project root from this file's location (scripts/lib/ -> ../..), so the
 # scripts work from any clone path and any working directory.
 PROJECT_ROOT="$(cd -- "$(dirname -- "${BASH_SOURCE[0]}")/../.." && pwd -P)"
-DATA_DIR="$PROJECT_ROOT/.data"
+# DB_DATA_DIR runs a second, separate server (own data, socket, pid and log), e.g. the scratch
+# instance the fault test stops and starts: DB_DATA_DIR=.data/scratch DB_PORT=3499 bash scripts/db.sh start
+DATA_DIR="${DB_DATA_DIR:-$PROJECT_ROOT/.data}"
+[[ "$DATA_DIR" == /* ]] || DATA_DIR="$PROJECT_ROOT/$DATA_DIR"
 DB_DATADIR="$DATA_DIR/mariadb"
 DB_CNF="$DATA_DIR/my.cnf"
 DB_SOCKET="$DATA_DIR/mariadb.sock"
@@ -101,4 +104,24 @@ sql_ident() {
 check_db_name() {
   [[ "$1" =~ ^[A-Za-z0-9_]{1,64}$ ]] \
     || die "invalid database name '$1' (use letters, digits and underscores only)."
+}
+
+# The dump to restore: the given file, or the newest .data/backups/<db>-*.sql.gz; checked readable
+# and intact. Prints its path.
+pick_dump() {
+  local db="$1" dump="${2:-}"
+  command -v gzip >/dev/null 2>&1 || die "'gzip' not found; install gzip."
+  if [[ -z "$dump" ]]; then
+    # Names end in a fixed-width UTC timestamp, so the last in glob order is newest.
+    local -a dumps
+    shopt -s nullglob
+    dumps=("$DB_BACKUP_DIR/$db"-[0-9]*T[0-9]*Z.sql.gz)
+    shopt -u nullglob
+    (( ${#dumps[@]} > 0 )) \
+      || die "no backups of '$db' in $DB_BACKUP_DIR. Create one with: npm run db:backup -- $db (or name a dump file)."
+    dump="${dumps[-1]}"
+  fi
+  [[ -r "$dump" ]] || die "cannot read dump file '$dump'."
+  gzip -t "$dump" || die "dump '$dump' is corrupt (gzip integrity check failed)."
+  printf '%s' "$dump"
 }
