@@ -8,14 +8,24 @@ const UNAVAILABLE_CODES = new Set([
   "PROTOCOL_CONNECTION_LOST",
   "ER_CON_COUNT_ERROR",
   "ER_SERVER_SHUTDOWN",
+  // A server shutting down kills the connections and statements it still has.
+  "ER_CONNECTION_KILLED",
+  "ER_QUERY_INTERRUPTED",
   "ER_ACCESS_DENIED_ERROR",
 ]);
 
+/**
+ * True for errors that mean "the database cannot be reached right now": the codes above, and any
+ * error mysql2 marks `fatal` — the connection is gone (e.g. the ROLLBACK a failed transaction
+ * sends on a connection the server closed: "Can't add new command when connection is in closed
+ * state", which carries no code).
+ */
 export function isDatabaseUnavailable(error: unknown): boolean {
   let e: unknown = error;
   for (let depth = 0; e && depth < 5; depth++) {
     const code = (e as { code?: unknown }).code;
     if (typeof code === "string" && UNAVAILABLE_CODES.has(code)) return true;
+    if ((e as { fatal?: unknown }).fatal === true) return true;
     if (e instanceof AggregateError && e.errors.some(isDatabaseUnavailable)) return true;
     e = (e as { cause?: unknown }).cause;
   }

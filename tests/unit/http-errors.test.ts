@@ -1,6 +1,7 @@
 import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
+import { isDatabaseUnavailable } from "@/lib/errors";
 import { errorResponse } from "@/lib/http";
 
 describe("API error answers", () => {
@@ -19,6 +20,15 @@ describe("API error answers", () => {
     const body = JSON.stringify(await down.json());
     expect(body).not.toContain("3407");
     expect(body).not.toContain("ECONNREFUSED");
+  });
+
+  it("answers 503 for a connection the server closed, also inside a query error's cause", () => {
+    const closed = Object.assign(new Error("Can't add new command when connection is in closed state"), { fatal: true });
+    const killed = Object.assign(new Error("Connection was killed"), { code: "ER_CONNECTION_KILLED", errno: 1927 });
+    const wrapped = new Error("Failed query: insert into `problems` …", { cause: killed });
+    for (const error of [closed, killed, wrapped]) expect(errorResponse(error).status).toBe(503);
+    // A statement the server refused on a live connection is a bug, not an outage.
+    expect(isDatabaseUnavailable(Object.assign(new Error("Duplicate entry"), { code: "ER_DUP_ENTRY", fatal: false }))).toBe(false);
   });
 
   it("answers anything unexpected with a bare 500", async () => {
