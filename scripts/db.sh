@@ -8,7 +8,10 @@
 #   bash scripts/db.sh reset-test   drop and recreate presswright_test
 #
 # Environment: DB_PORT (default 3407), DB_APP_PASSWORD, DB_MIGRATE_PASSWORD,
-# DB_START_TIMEOUT (seconds, default 60).
+# DB_START_TIMEOUT (seconds, default 60), DB_DATA_DIR (default <project>/.data: another
+# directory runs a separate server), DB_PROVISION=0 (start only: skip creating databases and
+# re-granting users, e.g. to restart a provisioned server under load without the moment between
+# REVOKE and GRANT in which the app user may read nothing).
 #
 # The server runs from <project>/.data with its own generated option file on a
 # non-default port, so it never collides with a system MariaDB/MySQL.
@@ -290,7 +293,7 @@ cmd_start() {
     launch_server
   fi
 
-  provision
+  [[ "${DB_PROVISION:-1}" == 0 ]] || provision
   port="$(server_port)"
   if [[ -n "$port" && "$port" != "$DB_PORT" ]]; then
     note "warning: the running server listens on port $port, not DB_PORT=$DB_PORT. Run 'bash scripts/db.sh stop' and start again to change it."

@@ -53,7 +53,7 @@ stop_server() { if [[ -n "$SERVER_PID" ]]; then kill "$SERVER_PID" 2>/dev/null |
 stop_scratch_servers() {
   local dir
   for dir in "$ROOT"/.data/scratch-*/; do
-    [[ -d "$dir" ]] && DB_DATA_DIR="$dir" bash scripts/db.sh stop >/dev/null 2>&1 || true
+    [[ -d "$dir" ]] && DB_DATA_DIR="${dir%/}" bash scripts/db.sh stop >/dev/null 2>&1 || true
   done
 }
 cleanup() { stop_server; stop_scratch_servers; }
