@@ -133,6 +133,7 @@ describe.each(fuzzed.map((r) => [rowKey(r), r] as const))("%s", (key, row) => {
       const raw = toJsonText(value);
       const { call, res, text } = await sendBody(row, spec, raw);
       outcomes.set(res.status, (outcomes.get(res.status) ?? 0) + 1);
+      if (process.env.FUZZ_DEBUG && res.status >= 400) console.info(`[fuzz] ${key} ${res.status} ${text.slice(0, 300)} ← ${raw.slice(0, 300)}`);
       const problems = answerProblems(res, text);
       if (problems.length === 0 && res.ok) problems.push(...(await storedProblems(spec, call, raw, text)));
       if (problems.length > 0) throw new Error(problems.join("\n"));

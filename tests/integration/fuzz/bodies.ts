@@ -30,7 +30,7 @@ import { bookingInputSchema, problemCloseSchema, problemInputSchema } from "@/li
 import { sizingInputSchema } from "@/lib/validation/sizing";
 import { FULL_SIZING_INPUT } from "../../fixtures/sizing-inputs";
 import type { Call } from "../authz/matrix";
-import { fromZod } from "./arbitraries";
+import { fromZod, pastDateArb } from "./arbitraries";
 import { freshPress, nextSlot, op, type Shop } from "../authz/world";
 
 type Actor = { userId: string };
@@ -80,6 +80,33 @@ const slotArb = fc.tuple(fc.integer({ min: 1, max: 24 * 40 }), fc.integer({ min:
   return { startsAt: iso(start), endsAt: iso(start + hours * 3_600_000) };
 });
 
+/**
+ * Service-log fields that fit the entry's kind (an ISO code only on an oil sample, relief settings
+ * only on a relief check), done in the past and naming no parts that do not exist, so most
+ * well-shaped entries get through to the database.
+ */
+function fitServiceKind(body: unknown, iso4406: string, kind: string): Json {
+  const e: Json = { ...(body as Json) };
+  if (typeof e.performedOn === "string") e.performedOn = e.performedOn < new Date().toISOString().slice(0, 10) ? e.performedOn : "2024-02-29";
+  if (kind !== "oil-sample") delete e.iso4406;
+  else e.iso4406 = iso4406;
+  if (kind !== "relief-checked") {
+    delete e.reliefFoundBar;
+    delete e.reliefSetBar;
+  } else if (e.reliefFoundBar == null && e.reliefSetBar == null) e.reliefSetBar = 180;
+  delete e.componentId;
+  delete e.replacementLabel;
+  if (Array.isArray(e.parts)) e.parts = e.parts.map((p) => omit(p, "componentId"));
+  return e;
+}
+const ISO_CODES = fc.constantFrom("18/16/13", "-/15/12", "21/19/16");
+const serviceEntryArb = fc.tuple(fromZod(serviceEntryInputSchema), ISO_CODES, pastDateArb).map(([b, iso, day]) => {
+  const kind = (b as Json).kind === "hose-replaced" ? "other" : ((b as Json).kind as string);
+  return fitServiceKind({ ...(b as Json), kind, performedOn: day }, iso, kind);
+});
+/** Corrections of the matrix's entries, which are of kind "other". */
+const serviceEntryPatchArb = fc.tuple(fromZod(serviceEntryPatchSchema), pastDateArb).map(([b, day]) => fitServiceKind({ ...(b as Json), ...("performedOn" in (b as Json) ? { performedOn: day } : {}) }, "", "other"));
+
 export const FUZZ: Record<string, FuzzSpec> = {
   "POST app/api/auth/sign-in/route.ts": {
     valid: (s) => fc.oneof(fromZod(signInSchema), fc.constant({ email: s.users.member.email, password: s.users.member.password })),
@@ -121,7 +148,7 @@ export const FUZZ: Record<string, FuzzSpec> = {
     },
   },
   "POST app/api/components/[componentId]/replace/route.ts": {
-    valid: () => fc.record({ reason: fromZod(replaceComponentSchema.shape.reason), removedOn: fromZod(replaceComponentSchema.shape.removedOn), replacement: componentArb }),
+    valid: () => fc.record({ reason: fromZod(replaceComponentSchema.shape.reason), removedOn: pastDateArb, replacement: componentArb }),
     parse: (body) => ({ ...replaceComponentSchema.parse(body), replacement: componentInputSchema.parse((body as Json).replacement) }),
     stored: async ({ actor, call, response, parsed }) => {
       const old = await getComponent(actor, call.params!.componentId!);
@@ -163,7 +190,8 @@ export const FUZZ: Record<string, FuzzSpec> = {
     stored: async ({ actor, call, response, parsed }) => ({ actual: (await listProblems(actor, call.params!.pressId!)).open.find((p) => p.id === response.id), expected: parsed }),
   },
   "PATCH app/api/problems/[problemId]/route.ts": {
-    valid: () => fromZod(problemCloseSchema),
+    // A made-up service-log entry id is refused: mostly close with a reason alone.
+    valid: () => fc.tuple(fromZod(problemCloseSchema), fc.boolean()).map(([b, keepEntry]) => (keepEntry ? b : { ...omit(b, "serviceEntryId"), reason: (b as Json).reason ?? "Fixed it" })),
     parse: (body) => problemCloseSchema.parse(body),
     stored: async ({ actor, call, shop, parsed }) => {
       const closed = (await listProblems(actor, shop.pressId)).closed.find((p) => p.id === call.params!.problemId);
@@ -184,12 +212,12 @@ export const FUZZ: Record<string, FuzzSpec> = {
     },
   },
   "POST app/api/presses/[pressId]/service-log/route.ts": {
-    valid: () => fromZod(serviceEntryInputSchema),
+    valid: () => serviceEntryArb,
     parse: (body) => serviceEntryInputSchema.parse(body),
     stored: async ({ actor, response, parsed }) => ({ actual: await getServiceEntry(actor, response.id as string), expected: parsed }),
   },
   "PATCH app/api/service-log/[entryId]/route.ts": {
-    valid: () => fromZod(serviceEntryPatchSchema),
+    valid: () => serviceEntryPatchArb,
     parse: (body) => serviceEntryPatchSchema.parse(body),
     stored: async ({ actor, call, parsed }) => ({ actual: await getServiceEntry(actor, call.params!.entryId!), expected: parsed }),
   },
@@ -223,8 +251,9 @@ export const FUZZ: Record<string, FuzzSpec> = {
     valid: (s) => {
       const answer = fromZod(answerPatchSchema.shape.answers.element).map((a) => ({ ...(a as Json), opKey: op() }) as unknown as Json & { itemKey: string });
       const keys = s.monthlyItemKeys;
-      const onItem = fc.tuple(answer, fc.constantFrom(...keys)).map(([a, itemKey]) => ({ ...a, itemKey }));
-      return fc.record({ answers: fc.uniqueArray(fc.oneof(onItem, answer), { minLength: 1, maxLength: 5, selector: (a) => a.itemKey }) });
+      // A failed item needs a note; most answers are on items the checklist has.
+      const onItem = fc.tuple(answer, fc.constantFrom(...keys)).map(([a, itemKey]) => ({ ...a, itemKey, ...(a.outcome === "fail" && !a.note ? { note: "Seeping at the fitting" } : {}) }));
+      return fc.record({ answers: fc.uniqueArray(fc.oneof({ weight: 6, arbitrary: onItem }, { weight: 1, arbitrary: answer }), { minLength: 1, maxLength: 5, selector: (a) => a.itemKey }) });
     },
     parse: (body) => answerPatchSchema.parse(body),
     stored: async ({ actor, call, parsed }) => {
