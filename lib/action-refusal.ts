@@ -1,6 +1,6 @@
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { z } from "zod";
-import { ConflictError, FieldError, LockedError } from "@/lib/errors";
+import { ConflictError, FieldError, isValueRefusedByDatabase, LockedError, VALUE_REFUSED_MESSAGE } from "@/lib/errors";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 import type { ActionState } from "./action-state";
 
@@ -17,5 +17,7 @@ export function refusalState(error: unknown, values: Record<string, string>, for
   if (error instanceof z.ZodError) {
     return { ok: false, message: "Please fix the marked fields.", fieldErrors: fieldErrorsOf(error.issues), values };
   }
+  // A value its column cannot hold (the same mapping as lib/http.ts): the form's problem too.
+  if (isValueRefusedByDatabase(error)) return { ok: false, message: VALUE_REFUSED_MESSAGE, values };
   throw error;
 }

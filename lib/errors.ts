@@ -14,6 +14,18 @@ const UNAVAILABLE_CODES = new Set([
   "ER_ACCESS_DENIED_ERROR",
 ]);
 
+/** Whether the error or one of its causes (Drizzle wraps the driver's error) matches. */
+type Cause = { code?: unknown; errno?: unknown; fatal?: unknown };
+function someCause(error: unknown, test: (e: Cause) => boolean): boolean {
+  let e: unknown = error;
+  for (let depth = 0; e && depth < 5; depth++) {
+    if (test(e as Cause)) return true;
+    if (e instanceof AggregateError && e.errors.some((inner) => someCause(inner, test))) return true;
+    e = (e as { cause?: unknown }).cause;
+  }
+  return false;
+}
+
 /**
  * True for errors that mean "the database cannot be reached right now": the codes above, and any
  * error mysql2 marks `fatal` — the connection is gone (e.g. the ROLLBACK a failed transaction
@@ -21,16 +33,21 @@ const UNAVAILABLE_CODES = new Set([
  * state", which carries no code).
  */
 export function isDatabaseUnavailable(error: unknown): boolean {
-  let e: unknown = error;
-  for (let depth = 0; e && depth < 5; depth++) {
-    const code = (e as { code?: unknown }).code;
-    if (typeof code === "string" && UNAVAILABLE_CODES.has(code)) return true;
-    if ((e as { fatal?: unknown }).fatal === true) return true;
-    if (e instanceof AggregateError && e.errors.some(isDatabaseUnavailable)) return true;
-    e = (e as { cause?: unknown }).cause;
-  }
-  return false;
+  return someCause(error, ({ code, fatal }) => fatal === true || (typeof code === "string" && UNAVAILABLE_CODES.has(code)));
 }
+
+/**
+ * MariaDB error numbers for a value it will not store: too long (1406), out of range (1264, 1690),
+ * not valid text or a bad date (1366, 1292), truncated (1265), a CHECK such as JSON_VALID (4025).
+ * Input the schemas let through by mistake: the request's fault, never a 500.
+ */
+const VALUE_REFUSED_ERRNOS = new Set([1264, 1265, 1292, 1366, 1406, 1690, 4025]);
+
+export function isValueRefusedByDatabase(error: unknown): boolean {
+  return someCause(error, ({ errno }) => typeof errno === "number" && VALUE_REFUSED_ERRNOS.has(errno));
+}
+
+export const VALUE_REFUSED_MESSAGE = "A value in the request is too long or out of range to be stored.";
 
 export const DATABASE_UNAVAILABLE_MESSAGE =
   "The database is not reachable right now. Please try again in a moment.";

@@ -6,12 +6,16 @@ import { sessionCookieName } from "@/lib/auth/cookie";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { ReauthRequiredError } from "@/lib/auth/recent-sign-in";
 import { validateSessionToken, type SessionUser, type ValidSession } from "@/lib/auth/session";
-import { BusyError, ConflictError, DATABASE_UNAVAILABLE_MESSAGE, FieldError, isDatabaseUnavailable, LockedError } from "@/lib/errors";
+import {
+  BusyError, ConflictError, DATABASE_UNAVAILABLE_MESSAGE, FieldError, isDatabaseUnavailable, isValueRefusedByDatabase, LockedError, VALUE_REFUSED_MESSAGE,
+} from "@/lib/errors";
 import { SigningUnavailableError } from "@/lib/inspections/chain-key";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
 
 /** Largest JSON body any route reads: the biggest real one (a full sizing input) is about 1 kB. */
 export const JSON_BODY_LIMIT = 64 * 1024;
+/** Deepest nesting a JSON body may have: real ones nest 4 levels; 30 000 levels overflow a library's recursive parser. */
+export const JSON_DEPTH_LIMIT = 32;
 /** fieldErrors key for problems with the request body as a whole. */
 export const BODY_FIELD = "body";
 
@@ -23,27 +27,67 @@ export class PayloadTooLargeError extends Error {
   }
 }
 
-/** A body that is not JSON (answered 400). */
+/** A body that is not JSON, or nests deeper than JSON_DEPTH_LIMIT (answered 400). */
 export class MalformedBodyError extends Error {
-  constructor() {
-    super("Request body is not valid JSON.");
+  constructor(
+    message = "Request body is not valid JSON.",
+    /** What to send instead (the body's fieldErrors entry). */
+    readonly hint = "Send a JSON object.",
+  ) {
+    super(message);
     this.name = "MalformedBodyError";
   }
+}
+
+/** Deepest array/object nesting in JSON text (brackets inside strings do not count). */
+function nestingDepth(text: string): number {
+  let depth = 0;
+  let deepest = 0;
+  let inString = false;
+  for (let i = 0; i < text.length; i += 1) {
+    const c = text.charCodeAt(i);
+    if (inString) {
+      if (c === 0x5c) i += 1;
+      else if (c === 0x22) inString = false;
+    } else if (c === 0x22) inString = true;
+    else if (c === 0x5b || c === 0x7b) deepest = Math.max(deepest, (depth += 1));
+    else if (c === 0x5d || c === 0x7d) depth -= 1;
+  }
+  return deepest;
+}
+
+// A lone UTF-16 surrogate ("\ud800" in JSON) is no character: MariaDB would store U+FFFD instead, or
+// refuse the JSON column's CHECK. Paired surrogates are one code point and do not match.
+const LONE_SURROGATE = /\p{Cs}/u;
+
+/**
+ * JSON.parse that refuses (MalformedBodyError) text that is not JSON, nests past the limit, or has
+ * a key or string that is not valid Unicode text.
+ */
+export function parseJsonText(text: string): unknown {
+  if (nestingDepth(text) > JSON_DEPTH_LIMIT) throw new MalformedBodyError(`Request body nests deeper than ${JSON_DEPTH_LIMIT} levels.`, "Send a JSON object without deep nesting.");
+  let wellFormed = true;
+  let parsed: unknown;
+  try {
+    parsed = JSON.parse(text, (key, value: unknown) => {
+      if (LONE_SURROGATE.test(key) || (typeof value === "string" && LONE_SURROGATE.test(value))) wellFormed = false;
+      return value;
+    });
+  } catch {
+    throw new MalformedBodyError();
+  }
+  if (!wellFormed) throw new MalformedBodyError("Request body has text that is not valid Unicode (a lone surrogate).", "Send text as valid Unicode.");
+  return parsed;
 }
 
 /**
  * Reads a JSON request body without ever holding more than `limit` bytes: a declared
  * Content-Length over the limit is refused before reading, and a chunked body is cancelled as soon
- * as it passes the limit; an empty body is not JSON either. Every route
- * reads JSON through this, never `req.json()`.
+ * as it passes the limit; an empty body is not JSON either, nor one nested past JSON_DEPTH_LIMIT.
+ * Every route reads JSON through this, never `req.json()`.
  */
 export async function readJsonBody(req: Request, limit: number = JSON_BODY_LIMIT): Promise<unknown> {
-  const text = await readBodyText(req, limit);
-  try {
-    return JSON.parse(text) as unknown;
-  } catch {
-    throw new MalformedBodyError();
-  }
+  return parseJsonText(await readBodyText(req, limit));
 }
 
 /** The body as text, read under `limit` as readJsonBody does (for routes that hand it on verbatim). */
@@ -129,10 +173,15 @@ export function errorResponse(error: unknown): NextResponse {
     return jsonError(413, error.message, { fieldErrors: { [BODY_FIELD]: [`Send at most ${Math.round(error.limit / 1024)} kB of JSON.`] } });
   }
   if (error instanceof MalformedBodyError) {
-    return jsonError(400, error.message, { fieldErrors: { [BODY_FIELD]: ["Send a JSON object."] } });
+    return jsonError(400, error.message, { fieldErrors: { [BODY_FIELD]: [error.hint] } });
   }
   // A path with a malformed percent-escape (/api/presses/%ff) cannot name anything: the client's fault.
   if (error instanceof URIError) return jsonError(400, "The address contains a malformed percent-escape.");
+  if (isValueRefusedByDatabase(error)) {
+    // Logged: it means a schema lets through what its column cannot hold.
+    console.warn("[api] value refused by the database", error instanceof Error ? error.message.split("\n")[0] : error);
+    return jsonError(400, VALUE_REFUSED_MESSAGE);
+  }
   if (isDatabaseUnavailable(error)) {
     return jsonError(503, DATABASE_UNAVAILABLE_MESSAGE, undefined, { headers: { "Retry-After": "5" } });
   }

@@ -2,7 +2,7 @@ import { describe, expect, it } from "vitest";
 import { z } from "zod";
 import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { isDatabaseUnavailable } from "@/lib/errors";
-import { errorResponse } from "@/lib/http";
+import { errorResponse, JSON_DEPTH_LIMIT, MalformedBodyError, parseJsonText } from "@/lib/http";
 
 describe("API error answers", () => {
   it("maps the data layer's errors to 404, 403, 400 and 503 without leaking details", async () => {
@@ -40,6 +40,45 @@ describe("API error answers", () => {
       expect(JSON.stringify(await res.json())).not.toMatch(/SELECT|secret|at /);
     } finally {
       console.error = original;
+    }
+  });
+
+  it("answers a value MariaDB refuses (too long, out of range, a failed CHECK) 400 without the SQL", async () => {
+    const original = console.warn;
+    console.warn = () => {};
+    try {
+      for (const errno of [1406, 1264, 4025]) {
+        const driver = Object.assign(new Error("Data too long for column 'name' at row 1"), { errno });
+        const res = errorResponse(Object.assign(new Error("Failed query: insert into `presses` …"), { cause: driver }));
+        expect(res.status).toBe(400);
+        expect(JSON.stringify(await res.json())).not.toMatch(/insert|column/);
+      }
+    } finally {
+      console.warn = original;
+    }
+  });
+});
+
+describe("JSON body text", () => {
+  it("parses objects nested up to the limit, with brackets inside strings not counted", () => {
+    const deep = `${"[".repeat(JSON_DEPTH_LIMIT)}"[[[[{{{{"${"]".repeat(JSON_DEPTH_LIMIT)}`;
+    expect(() => parseJsonText(deep)).not.toThrow();
+    expect(parseJsonText(String.raw`{"a":"\\\"[","b":["\ud83d\ude00"]}`)).toEqual({ a: '\\"[', b: ["\u{1F600}"] });
+  });
+
+  it("refuses deeper nesting, lone surrogates in keys or values, and text that is not JSON", async () => {
+    const cases = [`${"[".repeat(JSON_DEPTH_LIMIT + 1)}${"]".repeat(JSON_DEPTH_LIMIT + 1)}`, '{"a":"x\ud800"}', '{"\udfff":1}', "{", ""];
+    for (const text of cases) {
+      let error: unknown;
+      try {
+        parseJsonText(text);
+      } catch (e) {
+        error = e;
+      }
+      expect(error, text.slice(0, 40)).toBeInstanceOf(MalformedBodyError);
+      const res = errorResponse(error);
+      expect(res.status).toBe(400);
+      expect((await res.json()).fieldErrors.body).toHaveLength(1);
     }
   });
 });

@@ -21,8 +21,8 @@ import {
 /** Status classes a rule may name. 400 only where a library, not our code, answers a refusal (the upload SDK's bad signature). */
 export type Outcome = "2xx" | "400" | "401" | "403" | "404";
 export type Method = "GET" | "POST" | "PATCH" | "PUT" | "DELETE";
-/** One request: path (with query), the dynamic params, a JSON body, extra headers; `session: false` sends no cookie. */
-export type Call = { path: string; params?: Record<string, string>; body?: unknown; headers?: Record<string, string>; session?: false };
+/** One request: path (with query), the dynamic params, a JSON body (or `raw` bytes, sent as they are), extra headers; `session: false` sends no cookie. */
+export type Call = { path: string; params?: Record<string, string>; body?: unknown; raw?: string | Uint8Array<ArrayBuffer>; headers?: Record<string, string>; session?: false };
 
 type Common = { file: string; method: Method; rule: string };
 export type ShopRow = Common & {

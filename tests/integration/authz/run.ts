@@ -36,10 +36,11 @@ export async function send(file: string, method: Method, call: Call, cookie: str
   if (!handler) throw new Error(`${file} exports no ${method}`);
   const base: Record<string, string> = { host: "127.0.0.1:3000" };
   if (method !== "GET") base.origin = ORIGIN;
-  if (call.body !== undefined) base["content-type"] = "application/json";
+  const body = call.raw ?? (call.body === undefined ? undefined : JSON.stringify(call.body));
+  if (body !== undefined) base["content-type"] = "application/json";
   if (cookie) base.cookie = cookie;
   const all = Object.fromEntries(Object.entries({ ...base, ...call.headers, ...headers }).filter(([, v]) => v !== ""));
-  const req = new NextRequest(`${ORIGIN}${call.path}`, { method, headers: all, body: call.body === undefined ? undefined : JSON.stringify(call.body) });
+  const req = new NextRequest(`${ORIGIN}${call.path}`, { method, headers: all, body });
   return handler(req, { params: Promise.resolve(call.params ?? {}) });
 }
 

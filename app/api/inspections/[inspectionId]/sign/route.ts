@@ -1,6 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
 import { signInspection } from "@/lib/data/inspection-sign";
-import { apiRoute, readBodyText, requireApiSession } from "@/lib/http";
+import { apiRoute, parseJsonText, readBodyText, requireApiSession } from "@/lib/http";
 import { signInspectionSchema } from "@/lib/validation/inspection";
 
 type Context = { params: Promise<{ inspectionId: string }> };
@@ -14,13 +14,7 @@ export const POST = apiRoute(async (req: NextRequest, { params }: Context) => {
   const { inspectionId } = await params;
   // An empty body is allowed (nothing to send); anything else must be the (empty) JSON object.
   const text = await readBodyText(req);
-  let body: unknown = null;
-  try {
-    body = text ? JSON.parse(text) : {};
-  } catch {
-    body = null;
-  }
-  signInspectionSchema.parse(body);
+  signInspectionSchema.parse(text ? parseJsonText(text) : {});
   const outcome = await signInspection({ userId: current.user.id, signedInAt: current.session.createdAt }, inspectionId);
   return NextResponse.json(outcome);
 });
