@@ -11,15 +11,13 @@ import { buttonClass } from "@/components/ui/button";
 export default async function NotFound() {
   await connection();
   return (
-    // A main landmark of its own: an address that matches no route renders this under the root
-    // layout alone, outside the (public)/(app) layouts that hold the other pages' <main>.
-    <main className="mx-auto max-w-lg px-4 py-16 text-center">
+    <div className="mx-auto max-w-lg px-4 py-16 text-center">
       <p className="font-mono text-sm font-semibold text-oil-600">404</p>
       <h1 className="mt-2 text-2xl font-semibold">Nothing here</h1>
       <p className="mt-3 text-steel-600">This page does not exist, or it belongs to a shop you are not a member of.</p>
       <Link href="/dashboard" className={`${buttonClass("secondary")} mt-6`}>
         Back to the dashboard
       </Link>
-    </main>
+    </div>
   );
 }
