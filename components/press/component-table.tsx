@@ -12,6 +12,7 @@ import { KIND_LABELS } from "@/lib/press/component-fields";
 import { formatMoney } from "@/lib/press/parts-list";
 import { specSummary } from "@/lib/press/spec-summary";
 import type { UnitSystem } from "@/lib/units";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 type Props = { pressId: string; initial: ComponentRow[]; units: UnitSystem; currency: string; canEdit: boolean };
 
@@ -66,9 +67,9 @@ export function ComponentTable({ pressId, initial, units, currency, canEdit }: P
     <div className="flex flex-col gap-3">
       <FilterSelect value={kind} onChange={setKind} allLabel="All parts" options={kindsPresent.map((k) => ({ value: k, label: KIND_LABELS[k] }))} />
       {error ? <p className="text-sm text-fail">Could not refresh the parts: {(error as Error).message}</p> : null}
-      <div className="relative overflow-x-auto">
+      <ScrollRegion label="Parts">
         <DataTable table={table} minWidth="40rem" testId="component-list" cellClass="px-2 py-2" />
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

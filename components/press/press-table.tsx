@@ -19,6 +19,7 @@ import { STATUS_CODES } from "@/lib/status";
 import { fetchJson } from "@/lib/fetch-json";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import type { UnitSystem } from "@/lib/units";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 const col = createColumnHelper<PressWithStatus>();
 
@@ -89,9 +90,9 @@ export function PressTable({ initial, units }: { initial: PressWithStatus[]; uni
         </label>
       </div>
       {error ? <p className="text-sm text-fail">Could not refresh the list: {(error as Error).message}</p> : null}
-      <div className="relative overflow-x-auto rounded-lg bg-white ring-1 ring-steel-200">
+      <ScrollRegion label="Presses" className="rounded-lg bg-white ring-1 ring-steel-200">
         <DataTable table={table} minWidth="44rem" testId="press-table" cellClass="px-3 py-2 font-mono first:font-sans" empty="No presses match." />
-      </div>
+      </ScrollRegion>
     </div>
   );
 }

@@ -12,6 +12,7 @@ import { formatMoney } from "@/lib/press/parts-list";
 import { SERVICE_KIND_LABELS } from "@/lib/service/starting-plan";
 import { formatQuantity, type UnitSystem } from "@/lib/units";
 import { SERVICE_KIND_OPTIONS } from "./kind-options";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export type ServiceLogRow = Omit<ServiceEntry, "createdAt">;
 type Page = { entries: ServiceLogRow[]; nextCursor: string | null };
@@ -70,9 +71,9 @@ export function ServiceLogTable({ pressId, initial, units, currency, pageSize }:
         </a>
       </div>
       {error ? <p className="text-sm text-fail">Could not load the log: {(error as Error).message}</p> : null}
-      <div className="relative overflow-x-auto">
+      <ScrollRegion label="Service log">
         <DataTable table={table} minWidth="48rem" testId="service-log" cellClass="px-2 py-2" empty={isValidating && !data ? "Loading…" : "Nothing logged yet."} />
-      </div>
+      </ScrollRegion>
       {more ? (
         <button type="button" className="self-start text-sm text-oil-700 underline" onClick={() => void setSize(size + 1)} disabled={isValidating}>
           Show older entries

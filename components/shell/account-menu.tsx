@@ -10,8 +10,10 @@ export function AccountMenu({ displayName, email }: { displayName: string; email
     .toUpperCase();
   return (
     <details className="relative">
-      <summary className="flex h-10 w-10 cursor-pointer list-none items-center justify-center rounded-full bg-oil-500 text-sm font-bold text-ink" aria-label="Account menu">
-        {initials || "?"}
+      <summary className="flex h-10 w-10 cursor-pointer list-none items-center justify-center rounded-full bg-oil-500 text-sm font-bold text-ink">
+        {/* Named by words, not by an aria-label that would hide the initials the eye sees. */}
+        <span aria-hidden="true">{initials || "?"}</span>
+        <span className="sr-only">Account menu</span>
       </summary>
       <div className="absolute right-0 z-20 mt-2 w-64 rounded-lg bg-white p-2 text-ink shadow-lg ring-1 ring-steel-200">
         <p className="truncate px-2 pt-1 text-sm font-semibold">{displayName}</p>

@@ -33,7 +33,7 @@ describe("a new builder's account", () => {
     await expect(page.getByRole("heading", { level: 1 }).textContent()).resolves.toBe("Morgan Ash's shop");
     await expect(page.getByTestId("active-shop").first().textContent()).resolves.toBe("Morgan Ash's shop");
 
-    await page.locator('summary[aria-label="Account menu"]:visible').click();
+    await page.locator("summary:visible", { hasText: "Account menu" }).click();
     await page.getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL("**/sign-in");
     await page.goto("/dashboard");

@@ -3,51 +3,12 @@
 // so a new page is checked without being listed; a dynamic segment this file cannot fill fails.
 // Public pages are fetched signed out and signed in, the shop's pages signed in (demo manager).
 import { beforeAll, describe, expect, it } from "vitest";
-import { DEMO_PASSWORD, DEMO_USERS } from "@/db/demo-data";
 import { pageFiles } from "../app-files";
 import { BASE_URL } from "./browser";
+import { isPublic, NOT_FOUND_URL, resolveIds, signInCookie, urlOf, type SegmentIds } from "./page-urls";
 
-/** An id that names nothing: token pages then answer their "not found / expired" page. */
-const UNKNOWN_TOKEN = "aaaaaaaaaaaaaaaaaaaaaaaa";
 let cookie = "";
-const ids: Record<string, string> = {};
-
-async function api<T>(path: string): Promise<T> {
-  const res = await fetch(`${BASE_URL}${path}`, { headers: { cookie } });
-  expect(res.status, path).toBe(200);
-  return (await res.json()) as T;
-}
-
-/** Fills every dynamic segment from the demo shop, as its manager sees it. */
-async function resolveIds(): Promise<void> {
-  const { presses } = await api<{ presses: { id: string }[] }>("/api/presses");
-  for (const { id } of presses) {
-    const [{ components }, { entries }, { rows }] = await Promise.all([
-      api<{ components: { id: string }[] }>(`/api/presses/${id}/components`),
-      api<{ entries: { id: string }[] }>(`/api/presses/${id}/service-log`),
-      api<{ rows: { id: string }[] }>(`/api/presses/${id}/inspections`),
-    ]);
-    if (components[0] && entries[0] && !ids.pressId) Object.assign(ids, { pressId: id, componentId: components[0].id, entryId: entries[0].id });
-    if (rows[0] && !ids.inspectionId) ids.inspectionId = rows[0].id;
-  }
-  const { shops } = await api<{ shops: { id: string }[] }>("/api/me");
-  const { templates } = await api<{ templates: { id: string }[] }>(`/api/inspection-templates?shopId=${shops[0]!.id}`);
-  ids.templateId = templates[0]!.id;
-  ids.token = UNKNOWN_TOKEN;
-}
-
-/** app/(app)/presses/[pressId]/page.tsx → /presses/<id>; route groups drop out. */
-function urlOf(file: string): string {
-  const segments = file.replace(/^app\//, "").replace(/\/?page\.tsx$/, "").split("/").filter((s) => s && !/^\(.*\)$/.test(s));
-  return "/" + segments.map((s) => {
-    const name = /^\[(.+)\]$/.exec(s)?.[1];
-    if (!name) return s;
-    if (!ids[name]) throw new Error(`headers.test.ts cannot fill [${name}] for ${file}: add it to resolveIds()`);
-    return ids[name];
-  }).join("/");
-}
-
-const isPublic = (file: string): boolean => !file.startsWith("app/(app)/");
+let ids: SegmentIds = {};
 
 type Checked = { url: string; signedIn: boolean; problems: string[] };
 
@@ -79,15 +40,8 @@ async function check(url: string, signedIn: boolean): Promise<Checked> {
 }
 
 beforeAll(async () => {
-  const manager = DEMO_USERS.find((u) => u.key === "manager")!;
-  const res = await fetch(`${BASE_URL}/api/auth/sign-in`, {
-    method: "POST",
-    headers: { "content-type": "application/json", origin: BASE_URL },
-    body: JSON.stringify({ email: manager.email, password: DEMO_PASSWORD }),
-  });
-  expect(res.status).toBe(200);
-  cookie = res.headers.getSetCookie().map((c) => c.split(";")[0]).join("; ");
-  await resolveIds();
+  cookie = await signInCookie();
+  ids = await resolveIds(cookie);
 });
 
 describe("security headers on every page", () => {
@@ -95,12 +49,12 @@ describe("security headers on every page", () => {
     const pages = pageFiles();
     const results: Checked[] = [];
     for (const file of pages) {
-      const url = urlOf(file);
+      const url = urlOf(file, ids);
       if (isPublic(file)) results.push(await check(url, false));
       results.push(await check(url, true));
     }
     // app/not-found.tsx: the page every unknown address gets.
-    results.push(await check("/no-such-page", false), await check("/no-such-page", true));
+    results.push(await check(NOT_FOUND_URL, false), await check(NOT_FOUND_URL, true));
     console.info(`[headers] ${pages.length} pages and the 404 page, ${results.length} responses checked`);
     expect(results.filter((r) => r.problems.length > 0).map((r) => `${r.url} (${r.signedIn ? "signed in" : "signed out"}): ${r.problems.join("; ")}`)).toEqual([]);
   });

@@ -2,6 +2,7 @@ import sharp from "sharp";
 import type { Browser, Locator, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { GPS_EXIF, noisyJpeg } from "../fixtures/images";
+import { axeAtEachWidth, describeFindings, isFailing } from "./axe";
 import { SCREENSHOT_DIR, launchBrowser, newPage, screenshot, signIn } from "./browser";
 
 type ApiPhoto = { id: string; caption: string | null; url: string; thumbUrl: string };
@@ -58,6 +59,10 @@ describe("photos", () => {
     await dialog.waitFor();
     await expectLoaded(page, dialog.getByAltText(caption));
     await page.screenshot({ path: `${SCREENSHOT_DIR}photos-viewer-1280.png` });
+    // The viewer dialog at a phone's and a desk's width: no serious or critical axe finding.
+    const viewer = await axeAtEachWidth(page, "press page, photo viewer open", () => dialog.waitFor());
+    expect(describeFindings(viewer.filter(isFailing))).toEqual([]);
+    await page.setViewportSize({ width: 1280, height: 800 });
     await dialog.getByRole("button", { name: "Close" }).click();
 
     // A member of another shop: the photo's API and the press page are 404 for them.

@@ -7,6 +7,7 @@ import { listComponents } from "@/lib/data/components";
 import { getPress } from "@/lib/data/presses";
 import { KIND_LABELS } from "@/lib/press/component-fields";
 import { formatMoney, partsTotals } from "@/lib/press/parts-list";
+import { ScrollRegion } from "@/components/ui/scroll-region";
 
 export const metadata: Metadata = { title: "Parts list" };
 
@@ -48,7 +49,7 @@ export default async function PartsListPage({ params }: { params: Promise<{ pres
         ))}
       </dl>
       <Card>
-        <div className="overflow-x-auto">
+        <ScrollRegion label="Parts list">
           <table className="w-full min-w-[36rem] text-left text-sm">
             <thead className="border-b border-steel-200 text-xs uppercase tracking-wide text-steel-500">
               <tr>
@@ -73,7 +74,7 @@ export default async function PartsListPage({ params }: { params: Promise<{ pres
               ))}
             </tbody>
           </table>
-        </div>
+        </ScrollRegion>
       </Card>
     </>
   );
