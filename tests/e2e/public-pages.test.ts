@@ -33,8 +33,11 @@ async function watchViolations(page: Page): Promise<string[]> {
   return seen;
 }
 
+/** Signs in on a sign-in page opened at `url`, once the page has hydrated (it asked /api/session). */
 async function signInVia(page: Page, url: string): Promise<void> {
+  const hydrated = page.waitForResponse((r) => r.url().endsWith("/api/session"));
   await page.goto(url);
+  await hydrated;
   await page.getByLabel("E-mail").fill(manager.email);
   await page.getByLabel("Password").fill(DEMO_PASSWORD);
   await page.getByRole("button", { name: "Sign in" }).click();
