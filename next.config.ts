@@ -1,13 +1,18 @@
 import type { NextConfig } from "next";
+import { distDirOf } from "./lib/dist-dir";
 import { isLocalUploadService, photoImagePatterns } from "./lib/uploads/hosts";
 
 const nextConfig: NextConfig = {
   poweredByHeader: false,
-  // The test command builds into its own folder so it never disturbs a running start command.
-  distDir: process.env.NEXT_DIST_DIR ?? ".next",
+  distDir: distDirOf(process.env),
   reactStrictMode: true,
-  // forbidden() and forbidden.tsx render our 403 page.
-  experimental: { authInterrupts: true },
+  experimental: {
+    // forbidden() and forbidden.tsx render our 403 page.
+    authInterrupts: true,
+    // integrity="sha256-…" on every script file Next puts in a page; inline scripts are hashed
+    // into prerendered pages' CSP by proxy.ts (lib/csp/prerendered-pages.ts).
+    sri: { algorithm: "sha256" },
+  },
   // esbuild bundles the inspection run's service worker at build time (app/serwist/[path]/route.ts).
   serverExternalPackages: ["@node-rs/argon2", "mysql2", "esbuild"],
   images: {

@@ -1,5 +1,6 @@
 import { NextResponse, type NextRequest } from "next/server";
-import { uploadCspSources } from "@/lib/uploads/hosts";
+import { hashSources, nonceSources, pagePolicy } from "@/lib/csp/policy";
+import { prerenderedScriptHashes } from "@/lib/csp/prerendered-pages";
 
 // Signed-in areas; a request without any session cookie goes straight to sign-in. This is a
 // convenience, never the gate: every page and route validates the session itself.
@@ -15,26 +16,18 @@ export function proxy(request: NextRequest): NextResponse {
     return NextResponse.redirect(url);
   }
 
-  const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
-  const dev = process.env.NODE_ENV === "development";
-  // Photos are served by, and uploaded straight from the browser to, the upload service.
-  const uploads = uploadCspSources(process.env);
-  const csp = [
-    "default-src 'self'",
-    `script-src 'self' 'nonce-${nonce}' 'strict-dynamic'${dev ? " 'unsafe-eval'" : ""}`,
-    // Style attributes (charts, next/font) need inline styles; scripts stay nonce-only.
-    "style-src 'self' 'unsafe-inline'",
-    `img-src 'self' blob: data: ${uploads.img.join(" ")}`,
-    "font-src 'self'",
-    `connect-src 'self' ${uploads.connect.join(" ")}`,
-    // The inspection run's service worker (app/sw.ts); 'strict-dynamic' would otherwise refuse it.
-    "worker-src 'self'",
-    "object-src 'none'",
-    "base-uri 'none'",
-    "form-action 'self'",
-    "frame-ancestors 'none'",
-  ].join("; ");
+  // A prerendered page's HTML was built before any request, so it carries no nonce: its policy
+  // allows exactly the inline scripts in that HTML, by hash.
+  const hashes = prerenderedScriptHashes(pathname);
+  if (hashes) {
+    const response = NextResponse.next();
+    response.headers.set("Content-Security-Policy", pagePolicy(hashSources(hashes)));
+    return response;
+  }
 
+  const nonce = Buffer.from(crypto.randomUUID()).toString("base64");
+  const csp = pagePolicy(nonceSources(nonce));
+  // Next reads the nonce from the request's policy and puts it on the scripts it renders.
   const requestHeaders = new Headers(request.headers);
   requestHeaders.set("x-nonce", nonce);
   requestHeaders.set("Content-Security-Policy", csp);

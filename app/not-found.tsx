@@ -1,15 +1,13 @@
 import Link from "next/link";
-import { connection } from "next/server";
 import { buttonClass } from "@/components/ui/button";
 
 /**
- * Rendered per request, not prerendered at build time: the CSP (proxy.ts) allows only scripts
- * carrying this request's nonce, and a page built ahead of time has no nonce, so the browser would
- * block its inline scripts. Pages that answer 404 at build time (e.g. /dev/outbox outside
- * development) get this page too.
+ * Prerendered: every address that matches no route gets this HTML, with a CSP that lists the
+ * hashes of its inline scripts (proxy.ts, lib/csp/prerendered-pages.ts). A page that calls
+ * notFound() while rendering for a request renders it then, with that request's nonce. It reads
+ * no request data: it is part of every page's tree, so doing so would make every page dynamic.
  */
-export default async function NotFound() {
-  await connection();
+export default function NotFound() {
   return (
     <div className="mx-auto max-w-lg px-4 py-16 text-center">
       <p className="font-mono text-sm font-semibold text-oil-600">404</p>

@@ -6,41 +6,20 @@
 // "closed" in the answers: the server hung up while this client was still writing, so Node's client
 // reports the write error instead of the 413 (curl, which reads while it writes, shows the 413).
 //   npm run bench:body-limit          (after `npx next build`; the database must be running)
-import { spawn } from "node:child_process";
 import { readFileSync } from "node:fs";
 import { request } from "node:http";
-import { fileURLToPath } from "node:url";
+import { startBenchServer } from "./lib/bench-server.mjs";
 
-const ROOT = fileURLToPath(new URL("..", import.meta.url));
 const PORT = Number(process.env.BENCH_PORT ?? 3190);
 const CONCURRENT = 20;
 const BODY_BYTES = 200 * 1024 * 1024;
 const CHUNK = Buffer.alloc(64 * 1024, 0x20);
 
-const server = spawn(process.execPath, ["scripts/server.mjs"], {
-  cwd: ROOT,
-  env: { ...process.env, NODE_ENV: "production", PORT: String(PORT), INSECURE_COOKIES: "1" },
-  stdio: ["ignore", "ignore", "inherit"],
-});
-const stop = () => server.kill("SIGTERM");
-process.on("exit", stop);
+const { server, stop, waitForHealth } = startBenchServer(PORT);
 
 function rssMb() {
   const status = readFileSync(`/proc/${server.pid}/status`, "utf8");
   return Number(/VmRSS:\s+(\d+) kB/.exec(status)?.[1] ?? 0) / 1024;
-}
-
-async function waitForHealth() {
-  const deadline = Date.now() + 90_000;
-  while (Date.now() < deadline) {
-    try {
-      if ((await fetch(`http://127.0.0.1:${PORT}/api/health`)).ok) return;
-    } catch {
-      // not listening yet
-    }
-    await new Promise((r) => setTimeout(r, 300));
-  }
-  throw new Error("the server did not become healthy within 90 s");
 }
 
 /** Streams up to 200 MB until the server answers or closes; resolves with the status and bytes sent. */

@@ -1,15 +1,15 @@
 import type { ReactNode } from "react";
-import { AppHeader, PublicHeader } from "@/components/shell/app-header";
 import { SiteFooter } from "@/components/shell/site-footer";
-import { getShopContext } from "@/lib/auth/current";
+import { VisitorHeader } from "@/components/shell/visitor-header";
 
-/** Public pages; a signed-in visitor (e.g. on the sizing page) keeps the full navigation. */
-export default async function PublicLayout({ children }: { children: ReactNode }) {
-  const context = await getShopContext();
-  const header = context ? <AppHeader context={context} /> : <PublicHeader />;
+/**
+ * Public pages. Reads no cookie, so the account-less ones are prerendered (proxy.ts gives them a
+ * hash-based CSP); the header learns about a signed-in visitor on the client.
+ */
+export default function PublicLayout({ children }: { children: ReactNode }) {
   return (
     <>
-      {header}
+      <VisitorHeader />
       <main className="flex-1">{children}</main>
       <SiteFooter />
     </>

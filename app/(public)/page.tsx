@@ -1,7 +1,6 @@
 import Link from "next/link";
-import { redirect } from "next/navigation";
+import { RedirectWhenSignedIn } from "@/components/shell/redirect-when-signed-in";
 import { buttonClass } from "@/components/ui/button";
-import { getCurrentSession } from "@/lib/auth/current";
 
 const JOBS = [
   {
@@ -22,10 +21,10 @@ const JOBS = [
   },
 ];
 
-export default async function LandingPage() {
-  if (await getCurrentSession()) redirect("/dashboard");
+export default function LandingPage() {
   return (
     <>
+      <RedirectWhenSignedIn to="/dashboard" />
       <section className="bg-steel-900 text-white">
         <div className="mx-auto grid max-w-6xl gap-8 px-4 py-12 md:grid-cols-[1.3fr_1fr] md:items-center md:py-20">
           <div>

@@ -1,19 +1,22 @@
 "use client";
 
 import Link from "next/link";
-import { useActionState } from "react";
+import { Suspense, useActionState } from "react";
 import { signInAction } from "@/app/(public)/sign-in/actions";
 import { Button } from "@/components/ui/button";
 import { Field } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";
 import { initialActionState } from "@/lib/action-state";
+import { NextPathField } from "./sign-in-link";
 
-export function SignInForm({ next }: { next?: string }) {
+export function SignInForm() {
   const [state, action, pending] = useActionState(signInAction, initialActionState);
   return (
     <form action={action} className="flex flex-col gap-4" noValidate>
       <FormMessage message={state.message} />
-      {next ? <input type="hidden" name="next" value={next} /> : null}
+      <Suspense fallback={null}>
+        <NextPathField />
+      </Suspense>
       <Field name="email" label="E-mail" type="email" autoComplete="username" required defaultValue={state.values?.email} errors={state.fieldErrors?.email} />
       <Field name="password" label="Password" type="password" autoComplete="current-password" required errors={state.fieldErrors?.password} />
       <Button type="submit" disabled={pending}>

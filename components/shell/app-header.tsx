@@ -1,12 +1,14 @@
 import Link from "next/link";
 import { LogoMark } from "@/components/ui/logo";
-import type { ShopContext } from "@/lib/auth/current";
+import type { ShopSummary } from "@/lib/data/shops";
 import { AccountMenu } from "./account-menu";
 import { NavLinks } from "./nav-links";
 import { ShopSwitcher } from "./shop-switcher";
 
+type HeaderContext = { user: { displayName: string; email: string }; shop: ShopSummary; shops: ShopSummary[] };
+
 /** Signed-in header: mark, shop switcher, account menu, and the main navigation below on phones. */
-export function AppHeader({ context }: { context: Pick<ShopContext, "user" | "shop" | "shops"> }) {
+export function AppHeader({ context }: { context: HeaderContext }) {
   return (
     <header className="no-print bg-steel-900 text-white">
       <div className="mx-auto flex max-w-6xl flex-col gap-2 px-4 py-2 md:flex-row md:items-center md:gap-6">

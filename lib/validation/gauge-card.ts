@@ -3,6 +3,7 @@
  * either unit system prints the same forces. `units` picks the gauge steps (10 bar or 100 psi).
  */
 import { z } from "zod";
+import "./browser-jitless";
 import { INPUT_LIMITS } from "@/lib/hydraulics";
 
 const L = INPUT_LIMITS;

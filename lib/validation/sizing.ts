@@ -8,6 +8,7 @@
  * few kB where classic zod costs about 30 kB of the page's first load. Every message is our own.
  */
 import * as z from "zod/mini";
+import "./browser-jitless";
 import { INPUT_LIMITS, type InputProblem } from "@/lib/hydraulics";
 import type { PlateInput, PlatenInput, SizingInput, ThroatInput } from "@/lib/hydraulics/types";
 import { MIN_BORE_MINUS_ROD_MM } from "@/lib/hydraulics/validate";

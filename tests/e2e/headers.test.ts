@@ -2,6 +2,9 @@
 // HTTP against the production server the browser tests use. The pages come from app/**/page.tsx,
 // so a new page is checked without being listed; a dynamic segment this file cannot fill fails.
 // Public pages are fetched signed out and signed in, the shop's pages signed in (demo manager).
+// A page rendered per request carries a nonce; a prerendered page (proxy.ts, hash-based policy)
+// lists the sha256 of each of its inline scripts and sends everyone the same HTML.
+import { createHash } from "node:crypto";
 import { beforeAll, describe, expect, it } from "vitest";
 import { pageFiles } from "../app-files";
 import { BASE_URL } from "./browser";
@@ -10,7 +13,9 @@ import { isPublic, NOT_FOUND_URL, resolveIds, signInCookie, urlOf, type SegmentI
 let cookie = "";
 let ids: SegmentIds = {};
 
-type Checked = { url: string; signedIn: boolean; problems: string[] };
+type Checked = { url: string; signedIn: boolean; problems: string[]; prerendered: boolean; html: string };
+
+const sha256 = (text: string): string => createHash("sha256").update(text, "utf8").digest("base64");
 
 async function check(url: string, signedIn: boolean): Promise<Checked> {
   const res = await fetch(`${BASE_URL}${url}`, { headers: signedIn ? { cookie } : {}, redirect: "follow" });
@@ -29,14 +34,21 @@ async function check(url: string, signedIn: boolean): Promise<Checked> {
   if (h("x-content-type-options") !== "nosniff") problems.push(`X-Content-Type-Options: "${h("x-content-type-options")}"`);
   if (!h("referrer-policy")) problems.push("no Referrer-Policy");
   if (res.headers.has("x-powered-by")) problems.push(`X-Powered-By: ${h("x-powered-by")}`);
-  if (signedIn && !/\bno-store\b/.test(h("cache-control"))) problems.push(`signed in without no-store: Cache-Control "${h("cache-control")}"`);
-  // The policy is only as good as the page: every inline script must carry this response's nonce.
+  // The policy is only as good as the page: every inline script must carry this response's nonce,
+  // or — on a prerendered page, whose policy has no nonce — have its hash listed.
   const nonce = /'nonce-([^']+)'/.exec(scriptSrc)?.[1];
-  for (const [tag] of html.matchAll(/<script\b[^>]*>/g)) {
-    if (/\ssrc=/.test(tag)) continue;
-    if (!nonce || !tag.includes(`nonce="${nonce}"`)) problems.push(`inline script without the nonce: ${tag.slice(0, 80)}`);
+  const hashes = new Set([...scriptSrc.matchAll(/'sha256-([^']+)'/g)].map((m) => m[1]));
+  const prerendered = !nonce && hashes.size > 0;
+  // A prerendered page is the same HTML for everyone (compared below), so it may be cached.
+  if (signedIn && !prerendered && !/\bno-store\b/.test(h("cache-control"))) problems.push(`signed in without no-store: Cache-Control "${h("cache-control")}"`);
+  if (prerendered && scriptSrc.includes("'strict-dynamic'")) problems.push("a hash-based script-src with 'strict-dynamic'");
+  for (const [, attributes = "", body = ""] of html.matchAll(/<script\b([^>]*)>([\s\S]*?)<\/script>/g)) {
+    if (/\ssrc=/.test(attributes)) continue;
+    if (prerendered ? !hashes.has(sha256(body)) : !nonce || !attributes.includes(`nonce="${nonce}"`)) {
+      problems.push(`inline script ${prerendered ? "whose hash is not in the policy" : "without the nonce"}: ${body.slice(0, 60)}`);
+    }
   }
-  return { url, signedIn, problems };
+  return { url, signedIn, problems, prerendered, html };
 }
 
 beforeAll(async () => {
@@ -50,12 +62,17 @@ describe("security headers on every page", () => {
     const results: Checked[] = [];
     for (const file of pages) {
       const url = urlOf(file, ids);
-      if (isPublic(file)) results.push(await check(url, false));
-      results.push(await check(url, true));
+      const signedIn = await check(url, true);
+      if (isPublic(file)) {
+        const signedOut = await check(url, false);
+        if (signedIn.prerendered && signedIn.html !== signedOut.html) signedIn.problems.push("prerendered, yet different HTML signed in");
+        results.push(signedOut);
+      }
+      results.push(signedIn);
     }
     // app/not-found.tsx: the page every unknown address gets.
     results.push(await check(NOT_FOUND_URL, false), await check(NOT_FOUND_URL, true));
-    console.info(`[headers] ${pages.length} pages and the 404 page, ${results.length} responses checked`);
+    console.info(`[headers] ${pages.length} pages and the 404 page, ${results.length} responses checked, ${results.filter((r) => r.prerendered).length} of them prerendered (hash-based policy)`);
     expect(results.filter((r) => r.problems.length > 0).map((r) => `${r.url} (${r.signedIn ? "signed in" : "signed out"}): ${r.problems.join("; ")}`)).toEqual([]);
   });
 });

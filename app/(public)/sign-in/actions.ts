@@ -1,5 +1,6 @@
 "use server";
 
+import { headers } from "next/headers";
 import { redirect } from "next/navigation";
 import { echoValues, type ActionState } from "@/lib/action-state";
 import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
@@ -26,5 +27,18 @@ export async function signInAction(_prev: ActionState, form: FormData): Promise<
     return { ok: false, message, values };
   }
   await setSessionCookie(result.token);
-  redirect(safeNextPath(form.get("next")));
+  redirect(safeNextPath(form.get("next") ?? nextOfSubmittingPage(await headers())));
+}
+
+/**
+ * The prerendered sign-in page adds its ?next= field in the browser; a form sent before that (no
+ * JavaScript, or a very quick click) still carries the page's address in Referer. Whatever it
+ * says goes through safeNextPath like the field would.
+ */
+function nextOfSubmittingPage(requestHeaders: Headers): string | null {
+  try {
+    return new URL(requestHeaders.get("referer") ?? "").searchParams.get("next");
+  } catch {
+    return null;
+  }
 }

@@ -67,6 +67,13 @@ export const ROUTES: RouteRow[] = [
   { file: "app/api/due/route.ts", method: "GET", scope: "user", rule: "signed in: due items of the caller's shops", call: async () => ({ path: "/api/due" }) },
   { file: "app/api/bookings/mine/route.ts", method: "GET", scope: "user", rule: "signed in: the caller's bookings", call: async () => ({ path: "/api/bookings/mine" }) },
   {
+    file: "app/api/session/route.ts", method: "GET", scope: "public", rule: "anyone: the caller's own session, or signedIn false (the prerendered public pages' header)",
+    cases: [
+      { name: "signed out", expect: "2xx", call: async () => ({ path: "/api/session", session: false }) },
+      { name: "signed in", expect: "2xx", call: async () => ({ path: "/api/session" }) },
+    ],
+  },
+  {
     file: "app/api/health/route.ts", method: "GET", scope: "public", rule: "anyone (load balancers)",
     cases: [{ name: "anyone", expect: "2xx", call: async () => ({ path: "/api/health", session: false }) }],
   },
