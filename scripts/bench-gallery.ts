@@ -103,7 +103,7 @@ try {
   // Interleaved rounds, so drift in machine load affects both measurements alike.
   for (let round = 0; round < ROUNDS + 2; round++) {
     const start = performance.now();
-    const views = await listPressPhotos(actor, pressId);
+    const { photos: views } = await listPressPhotos(actor, pressId);
     const listed = performance.now();
     bytes = await fetchAll(
       views.map((v) => v.thumbUrl),

@@ -1,7 +1,8 @@
 import { startInspectionAction } from "@/app/(app)/inspections/actions";
 import type { InspectionDueItem } from "@/lib/data/inspection-due";
 import type { InspectionPage } from "@/lib/data/inspection-lists";
-import type { ChainReport } from "@/lib/data/inspection-sign";
+import type { ChainStatus } from "@/lib/data/chain-status";
+import { ChainCheck } from "./chain-check";
 import { formatWhen } from "./inspection-record";
 import { InspectionList } from "./inspection-list";
 import { StartInspectionForm } from "./start-inspection-form";
@@ -10,7 +11,7 @@ type Props = {
   pressId: string;
   due: InspectionDueItem[];
   recent: InspectionPage;
-  chain: (ChainReport & { brokenCount: number }) | null;
+  chain: ChainStatus | null;
   templates: { value: string; label: string }[];
   timeZone: string;
 };
@@ -20,27 +21,11 @@ export function PressInspectionsPanel({ pressId, due, recent, chain, templates, 
   return (
     <div className="flex flex-col gap-4">
       {chain ? (
-        chain.intact ? (
-          <p className="rounded-md bg-ok-soft px-3 py-2 text-sm text-ok ring-1 ring-ok/30" data-testid="chain-status">
-            Record intact: {chain.checked === 1 ? "1 signed inspection" : `${chain.checked} signed inspections`} checked against the chain.
-          </p>
-        ) : (
-          <div role="alert" className="rounded-md bg-fail-soft px-3 py-2 text-sm text-fail ring-1 ring-fail/30" data-testid="chain-status">
-            <p className="font-semibold">
-              Record broken: {chain.brokenCount === 1 ? "1 signed inspection no longer matches" : `${chain.brokenCount} signed inspections no longer match`} its chain.
-            </p>
-            <ul className="mt-1 list-inside list-disc">
-              {chain.broken.map((b) => (
-                <li key={b.id}>
-                  Record no. {b.chainSeq} ({b.reason === "content" ? "its content changed" : b.reason === "link" ? "its link to the record before changed" : "a record before it is missing"}) —{" "}
-                  <a href={`/inspections/${b.id}`} className="underline">
-                    open it
-                  </a>
-                </li>
-              ))}
-            </ul>
-          </div>
-        )
+        <ChainCheck
+          pressId={pressId}
+          timeZone={timeZone}
+          initial={{ checked: chain.checked, intact: chain.intact, brokenCount: chain.brokenCount, broken: chain.broken, checkedAt: chain.checkedAt.toISOString() }}
+        />
       ) : null}
       {due.length > 0 ? (
         <ul className="flex flex-col gap-1 text-sm" data-testid="press-due">

@@ -2,42 +2,47 @@
 
 import Image from "next/image";
 import { useMemo, useState } from "react";
-import useSWR from "swr";
+import useSWRInfinite from "swr/infinite";
 import { fetchJson } from "@/lib/fetch-json";
 import { PHOTO_KIND_LABELS, PHOTO_KIND_OPTIONS, type PhotoKind } from "@/lib/photos/kinds";
 import { pressPhotosUrl, type PhotoItem } from "./photo-api";
 import { PhotoUploader, type PartOption } from "./photo-uploader";
 import { PhotoViewer } from "./photo-viewer";
 
+export type GalleryPage = { photos: PhotoItem[]; nextCursor: string | null; counts?: Partial<Record<PhotoKind, number>> };
+
 type Props = {
   pressId: string;
-  initial: PhotoItem[];
+  /** The first page of all kinds, with the count of each kind. */
+  initial: GalleryPage;
   currentUserId: string;
   /** Managers may edit and delete anyone's photos; the server decides either way. */
   canManage: boolean;
   /** Whether to offer the uploader (members of the shop, press not retired). */
   canAttach: boolean;
   parts?: PartOption[];
-  /** Photo links expire (lib/photos/file-urls.ts): the list is fetched again well before they do. */
+  /** Photo links expire (lib/photos/file-urls.ts): the pages shown are fetched again well before they do. */
   refreshMs: number;
 };
 
-/** The press page's photos: upload, filter by kind, open one large, edit or delete it. */
+/** The press page's photos, newest first a page at a time: upload, filter by kind, open one large, edit or delete it. */
 export function PressGallery({ pressId, initial, currentUserId, canManage, canAttach, parts, refreshMs }: Props) {
-  const url = pressPhotosUrl(pressId);
-  const { data, error, mutate } = useSWR<{ photos: PhotoItem[] }>(url, fetchJson, { fallbackData: { photos: initial }, refreshInterval: refreshMs });
   const [kind, setKind] = useState<PhotoKind | "all">("all");
   const [openId, setOpenId] = useState<string | null>(null);
+  const base = `${pressPhotosUrl(pressId)}${kind === "all" ? "" : `?kind=${kind}`}`;
+  const { data, error, mutate, size, setSize, isValidating } = useSWRInfinite<GalleryPage>(
+    (index, previous: GalleryPage | null) => (index === 0 ? base : previous?.nextCursor ? `${base}${kind === "all" ? "?" : "&"}cursor=${previous.nextCursor}` : null),
+    fetchJson<GalleryPage>,
+    // Every page shown is refetched on refresh: older pages' links expire as well.
+    { fallbackData: kind === "all" ? [initial] : undefined, refreshInterval: refreshMs, revalidateAll: true },
+  );
 
-  const all = useMemo(() => data?.photos ?? [], [data]);
-  const counts = useMemo(() => {
-    const byKind = new Map<PhotoKind, number>();
-    for (const p of all) byKind.set(p.kind, (byKind.get(p.kind) ?? 0) + 1);
-    return byKind;
-  }, [all]);
-  const shown = kind === "all" ? all : all.filter((p) => p.kind === kind);
-  const open = all.find((p) => p.id === openId) ?? null;
-  const filters = [{ value: "all" as const, label: "All", count: all.length }, ...PHOTO_KIND_OPTIONS.map((o) => ({ ...o, count: counts.get(o.value) ?? 0 }))];
+  const shown = useMemo(() => (data ?? []).flatMap((p) => p.photos), [data]);
+  const counts = data?.[0]?.counts ?? initial.counts ?? {};
+  const total = Object.values(counts).reduce((sum, n) => sum + n, 0);
+  const more = data?.at(-1)?.nextCursor != null;
+  const open = shown.find((p) => p.id === openId) ?? null;
+  const filters = [{ value: "all" as const, label: "All", count: total }, ...PHOTO_KIND_OPTIONS.map((o) => ({ ...o, count: counts[o.value] ?? 0 }))];
 
   return (
     <div className="flex flex-col gap-4">
@@ -65,7 +70,7 @@ export function PressGallery({ pressId, initial, currentUserId, canManage, canAt
 
       {shown.length === 0 ? (
         <p className="rounded-md border border-dashed border-steel-300 px-4 py-6 text-center text-sm text-steel-600">
-          {all.length === 0 ? "No photos of this press yet." : `No ${PHOTO_KIND_LABELS[kind as PhotoKind].toLowerCase()} photos yet.`}
+          {!data && isValidating ? "Loading…" : total === 0 ? "No photos of this press yet." : `No ${PHOTO_KIND_LABELS[kind as PhotoKind].toLowerCase()} photos yet.`}
         </p>
       ) : (
         <ul className="grid grid-cols-2 gap-3 sm:grid-cols-3 lg:grid-cols-4 xl:grid-cols-5" data-testid="photo-gallery">
@@ -94,6 +99,12 @@ export function PressGallery({ pressId, initial, currentUserId, canManage, canAt
           ))}
         </ul>
       )}
+
+      {more ? (
+        <button type="button" className="self-start text-sm text-oil-700 underline" onClick={() => void setSize(size + 1)} disabled={isValidating}>
+          Show older photos
+        </button>
+      ) : null}
 
       <PhotoViewer
         photo={open}

@@ -1,27 +1,27 @@
 import { Card } from "@/components/ui/card";
 import { can, type Role } from "@/lib/auth/permissions";
-import { listComponents } from "@/lib/data/components";
-import { listPressPhotos } from "@/lib/data/photos";
+import { countPressPhotos, listPressPhotos } from "@/lib/data/photos";
 import { photoUrlTtlS } from "@/lib/photos/file-urls";
 import { PressGallery } from "./press-gallery";
+import type { PartOption } from "./photo-uploader";
 
-type Props = { pressId: string; userId: string; role: Role; retired: boolean };
+type Props = { pressId: string; userId: string; role: Role; retired: boolean; parts: PartOption[] };
 
-/** The press page's Photos card: the first list comes with the page, then the gallery keeps it fresh. */
-export async function PressPhotos({ pressId, userId, role, retired }: Props) {
+/** The press page's Photos card: the newest page comes with the page, then the gallery keeps it fresh and loads older ones. */
+export async function PressPhotos({ pressId, userId, role, retired, parts }: Props) {
   const actor = { userId };
-  const [photos, parts] = await Promise.all([listPressPhotos(actor, pressId), listComponents(actor, pressId)]);
+  const [page, counts] = await Promise.all([listPressPhotos(actor, pressId), countPressPhotos(actor, pressId)]);
   const canAttach = can(role, "attachPhoto") && !retired;
   return (
     <Card title="Photos">
       {retired ? <p className="mb-3 text-sm text-steel-600">This press is retired: its record is closed to new photos.</p> : null}
       <PressGallery
         pressId={pressId}
-        initial={photos.map((p) => ({ ...p, createdAt: p.createdAt.toISOString() }))}
+        initial={{ photos: page.photos.map((p) => ({ ...p, createdAt: p.createdAt.toISOString() })), nextCursor: page.nextCursor, counts }}
         currentUserId={userId}
         canManage={can(role, "editAnyPhoto")}
         canAttach={canAttach}
-        parts={parts.map((c) => ({ id: c.id, label: c.label }))}
+        parts={parts}
         refreshMs={(photoUrlTtlS() * 1000) / 2}
       />
     </Card>

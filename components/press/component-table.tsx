@@ -14,13 +14,16 @@ import { specSummary } from "@/lib/press/spec-summary";
 import type { UnitSystem } from "@/lib/units";
 import { ScrollRegion } from "@/components/ui/scroll-region";
 
-type Props = { pressId: string; initial: ComponentRow[]; units: UnitSystem; currency: string; canEdit: boolean };
+/** What the table shows of a part: the page passes only these fields, once (the rows render here). */
+export type PartRow = Pick<ComponentRow, "id" | "kind" | "label" | "spec" | "costCents" | "installedOn">;
 
-const col = createColumnHelper<ComponentRow>();
+type Props = { pressId: string; initial: PartRow[]; units: UnitSystem; currency: string; canEdit: boolean };
+
+const col = createColumnHelper<PartRow>();
 
 /** The installed parts: sortable by kind, name or cost, filterable by kind; kept fresh from the JSON API. */
 export function ComponentTable({ pressId, initial, units, currency, canEdit }: Props) {
-  const { data, error } = useSWR<{ components: ComponentRow[] }>(`/api/presses/${pressId}/components`, fetchJson, { fallbackData: { components: initial } });
+  const { data, error } = useSWR<{ components: PartRow[] }>(`/api/presses/${pressId}/components`, fetchJson, { fallbackData: { components: initial } });
   const [sorting, setSorting] = useState<SortingState>([{ id: "kind", desc: false }]);
   const [kind, setKind] = useState("all");
   const parts = useMemo(() => (data?.components ?? []).filter((c) => kind === "all" || c.kind === kind), [data, kind]);

@@ -4,6 +4,7 @@ import { db } from "@/db/client";
 import { inspections, memberships, presses } from "@/db/schema";
 import type { Actor } from "./actor";
 import { pressAccess } from "./press-access";
+import { encodeTimeCursor, parseTimeCursor } from "./time-cursor";
 
 export type InspectionSummary = {
   id: string;
@@ -32,16 +33,10 @@ const summaryColumns = {
   result: inspections.result,
 };
 
-/** Keyset cursor: the ordering time (ms) and id of the last row of a page. */
-function parseCursor(cursor: string | undefined): { at: Date; id: string } | null {
-  const match = cursor ? /^(\d{13})_([a-z2-7]{24})$/.exec(cursor) : null;
-  return match ? { at: new Date(Number(match[1])), id: match[2]! } : null;
-}
-
 function page(rows: InspectionSummary[], limit: number, timeOf: (r: InspectionSummary) => Date): InspectionPage {
   const shown = rows.slice(0, limit);
   const last = shown[shown.length - 1];
-  return { rows: shown, nextCursor: rows.length > limit && last ? `${timeOf(last).getTime().toString().padStart(13, "0")}_${last.id}` : null };
+  return { rows: shown, nextCursor: rows.length > limit && last ? encodeTimeCursor(timeOf(last), last.id) : null };
 }
 
 function before(column: typeof inspections.startedAt | typeof inspections.signedAt, cursor: { at: Date; id: string } | null): SQL | undefined {
@@ -56,7 +51,7 @@ export async function listPressInspections(actor: Actor, pressId: string, option
     .select(summaryColumns)
     .from(inspections)
     .innerJoin(presses, eq(presses.id, inspections.pressId))
-    .where(and(eq(inspections.pressId, pressId), before(inspections.startedAt, parseCursor(options.cursor))))
+    .where(and(eq(inspections.pressId, pressId), before(inspections.startedAt, parseTimeCursor(options.cursor))))
     .orderBy(desc(inspections.startedAt), desc(inspections.id))
     .limit(limit + 1);
   return page(rows, limit, (r) => r.startedAt);
@@ -74,7 +69,7 @@ export async function listShopInspections(actor: Actor, shopId: string, state: "
     .from(inspections)
     .innerJoin(presses, eq(presses.id, inspections.pressId))
     .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, actor.userId)))
-    .where(and(eq(presses.shopId, shopId), state === "open" ? isNull(inspections.signedAt) : isNotNull(inspections.signedAt), before(column, parseCursor(options.cursor))))
+    .where(and(eq(presses.shopId, shopId), state === "open" ? isNull(inspections.signedAt) : isNotNull(inspections.signedAt), before(column, parseTimeCursor(options.cursor))))
     .orderBy(desc(column), desc(inspections.id))
     .limit(limit + 1);
   return page(rows, limit, (r) => (state === "open" ? r.startedAt : (r.signedAt ?? r.startedAt)));

@@ -1,5 +1,5 @@
 import "server-only";
-import { and, desc, eq } from "drizzle-orm";
+import { and, count, desc, eq, lt, or } from "drizzle-orm";
 import { db } from "@/db/client";
 import { components, inspectionAnswers, inspections, memberships, photos, presses, problemReports, serviceEntries, users } from "@/db/schema";
 import { assertCan, canEditPhoto, ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
@@ -10,6 +10,7 @@ import { deleteStoredFiles, type StoredFile } from "@/lib/uploads/storage";
 import type { PhotoPatch } from "@/lib/validation/photo";
 import type { Actor } from "./actor";
 import { assertNotRetired, pressAccess, type Executor } from "./press-access";
+import { encodeTimeCursor, parseTimeCursor } from "./time-cursor";
 
 /** What the gallery shows of a photo: no storage keys or storage URLs, the uploader by name. */
 export type PhotoView = {
@@ -157,14 +158,42 @@ function withFileUrls(row: Omit<PhotoView, "url" | "thumbUrl">, now = Date.now()
   return { ...row, url: photoFileUrl(row.id, "full", now).url, thumbUrl: photoFileUrl(row.id, "thumb", now).url };
 }
 
-/** A press's photos, newest first, optionally of one kind. Authorization: members of its shop. */
-export async function listPressPhotos(actor: Actor, pressId: string, options: { kind?: PhotoKind } = {}): Promise<PhotoView[]> {
+/** How many photos one page of a press's gallery carries by default, and at most. */
+export const PHOTO_PAGE = 24;
+export const PHOTO_PAGE_MAX = 100;
+
+export type PhotoPage = { photos: PhotoView[]; nextCursor: string | null };
+
+/**
+ * A press's photos, newest first, optionally of one kind, a page at a time (keyset on the upload
+ * time and id, so a page costs the same however many photos the press has). Authorization:
+ * members of its shop.
+ */
+export async function listPressPhotos(actor: Actor, pressId: string, options: { kind?: PhotoKind; cursor?: string; limit?: number } = {}): Promise<PhotoPage> {
   await pressAccess(db, actor, pressId, "viewPress");
+  const limit = Math.min(Math.max(1, options.limit ?? PHOTO_PAGE), PHOTO_PAGE_MAX);
+  const after = parseTimeCursor(options.cursor);
   const rows = await selectViews()
-    .where(and(eq(photos.pressId, pressId), options.kind ? eq(photos.kind, options.kind) : undefined))
-    .orderBy(desc(photos.createdAt), desc(photos.id));
+    .where(
+      and(
+        eq(photos.pressId, pressId),
+        options.kind ? eq(photos.kind, options.kind) : undefined,
+        after ? or(lt(photos.createdAt, after.at), and(eq(photos.createdAt, after.at), lt(photos.id, after.id))) : undefined,
+      ),
+    )
+    .orderBy(desc(photos.createdAt), desc(photos.id))
+    .limit(limit + 1);
   const now = Date.now();
-  return rows.map((row) => withFileUrls(row, now));
+  const shown = rows.slice(0, limit);
+  const last = shown.at(-1);
+  return { photos: shown.map((row) => withFileUrls(row, now)), nextCursor: rows.length > limit && last ? encodeTimeCursor(last.createdAt, last.id) : null };
+}
+
+/** How many photos of each kind a press has (for the gallery's filter). Authorization: members of its shop. */
+export async function countPressPhotos(actor: Actor, pressId: string): Promise<Partial<Record<PhotoKind, number>>> {
+  await pressAccess(db, actor, pressId, "viewPress");
+  const rows = await db.select({ kind: photos.kind, n: count() }).from(photos).where(eq(photos.pressId, pressId)).groupBy(photos.kind);
+  return Object.fromEntries(rows.map((r) => [r.kind, r.n]));
 }
 
 /** Photos of one service entry, newest first (at most 50). Authorization: members of the press's shop. */

@@ -1,10 +1,11 @@
 import "server-only";
 import { and, eq } from "drizzle-orm";
-import type { Database } from "@/db/client";
+import { db, type Database } from "@/db/client";
 import { memberships, presses } from "@/db/schema";
 import { assertCan, NotFoundError, type Action, type Role } from "@/lib/auth/permissions";
 import { ConflictError } from "@/lib/errors";
 import type { Actor } from "./actor";
+import { memberPress } from "./presses";
 
 type Tx = Parameters<Parameters<Database["transaction"]>[0]>[0];
 export type Executor = Database | Tx;
@@ -23,6 +24,13 @@ export async function pressAccess(
   action: Action,
   options: { forUpdate?: boolean } = {},
 ): Promise<PressAccess> {
+  // Plain reads share the render's one lookup; transactions and row locks always read afresh.
+  if (executor === db && !options.forUpdate) {
+    const press = await memberPress(actor.userId, pressId);
+    if (!press) throw new NotFoundError("Press not found");
+    assertCan(press.role, action);
+    return { pressId: press.id, shopId: press.shopId, role: press.role, lifecycle: press.lifecycle, hourMeter: press.hourMeter };
+  }
   const query = executor
     .select({ pressId: presses.id, shopId: presses.shopId, role: memberships.role, lifecycle: presses.lifecycle, hourMeter: presses.hourMeter })
     .from(presses)

@@ -1,5 +1,6 @@
 import "server-only";
 import { and, asc, eq } from "drizzle-orm";
+import { cache } from "react";
 import { db } from "@/db/client";
 import { components, memberships, presses, shops } from "@/db/schema";
 import type { FRAME_TYPES } from "@/db/schema/presses";
@@ -60,10 +61,13 @@ export type PressDetail = PressSummary & {
 };
 
 /**
- * One press with the actor's role in its shop. Authorization: members of the press's shop;
- * for anyone else — or an id that does not exist — NotFoundError.
+ * A press as one of its shop's members sees it (null: not a member, or no such press). Memoised
+ * for one server render with React's `cache`, so a page that loads ten lists of one press reads
+ * the press and the membership once (`pressAccess` uses it for plain reads): every data function
+ * still checks its own action against the role, and outside a render (route handlers, actions,
+ * tests) `cache` memoises nothing.
  */
-export async function getPress(actor: Actor, pressId: string): Promise<PressDetail> {
+export const memberPress = cache(async (userId: string, pressId: string): Promise<PressDetail | null> => {
   const [row] = await db
     .select({
       ...summaryColumns,
@@ -76,10 +80,19 @@ export async function getPress(actor: Actor, pressId: string): Promise<PressDeta
       role: memberships.role,
     })
     .from(presses)
-    .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, actor.userId)))
+    .innerJoin(memberships, and(eq(memberships.shopId, presses.shopId), eq(memberships.userId, userId)))
     .innerJoin(shops, eq(shops.id, presses.shopId))
     .where(eq(presses.id, pressId))
     .limit(1);
+  return row ?? null;
+});
+
+/**
+ * One press with the actor's role in its shop. Authorization: members of the press's shop;
+ * for anyone else — or an id that does not exist — NotFoundError.
+ */
+export async function getPress(actor: Actor, pressId: string): Promise<PressDetail> {
+  const row = await memberPress(actor.userId, pressId);
   if (!row) throw new NotFoundError("Press not found");
   return row;
 }

@@ -7,20 +7,22 @@ export type TimelineEvent = {
   detail?: string;
 };
 
-type Part = { id: string; label: string; installedOn: string | null; removedOn: string | null; removalReason: string | null; replacedById: string | null };
+/** `replacedByLabel` names the successor when it is not among `parts` (a window of the history). */
+type Part = { id: string; label: string; installedOn: string | null; removedOn: string | null; removalReason: string | null; replacedById: string | null; replacedByLabel?: string | null };
 type Reading = { hours: number; readAt: Date; note: string | null; kind?: "reading" | "correction"; voided?: boolean; recordedByName?: string | null };
 
-export function pressTimeline(created: Date, parts: Part[], readings: Reading[]): TimelineEvent[] {
+/** Newest first; with `limit`, only that many (callers pass at least the newest `limit` of each source). */
+export function pressTimeline(created: Date, parts: Part[], readings: Reading[], limit = Infinity): TimelineEvent[] {
   const byId = new Map(parts.map((p) => [p.id, p]));
   const events: TimelineEvent[] = [{ on: created.toISOString().slice(0, 10), kind: "created", title: "Press record created" }];
   for (const part of parts) {
     if (part.installedOn) events.push({ on: part.installedOn, kind: "installed", title: `${part.label} installed` });
     if (part.removedOn) {
-      const successor = part.replacedById ? byId.get(part.replacedById) : undefined;
+      const successor = part.replacedById ? (byId.get(part.replacedById)?.label ?? part.replacedByLabel) : undefined;
       events.push({
         on: part.removedOn,
         kind: successor ? "replaced" : "removed",
-        title: successor ? `${part.label} replaced by ${successor.label}` : `${part.label} removed`,
+        title: successor ? `${part.label} replaced by ${successor}` : `${part.label} removed`,
         detail: part.removalReason ?? undefined,
       });
     }
@@ -35,5 +37,5 @@ export function pressTimeline(created: Date, parts: Part[], readings: Reading[])
   }
   // Newest first; on the same day a removal reads before the installation of its successor.
   const order = { created: 0, installed: 1, hours: 2, removed: 3, replaced: 3 } as const;
-  return events.sort((a, b) => (a.on === b.on ? order[b.kind] - order[a.kind] : b.on.localeCompare(a.on)));
+  return events.sort((a, b) => (a.on === b.on ? order[b.kind] - order[a.kind] : b.on.localeCompare(a.on))).slice(0, limit);
 }

@@ -1,4 +1,5 @@
 import { z } from "zod";
+import { TIME_CURSOR_PATTERN } from "@/lib/data/time-cursor";
 import { PHOTO_KINDS } from "@/db/schema/photos";
 import { ID_PATTERN } from "@/lib/ids";
 import { MAX_CAPTION_LENGTH } from "@/lib/photos/kinds";
@@ -33,5 +34,9 @@ export const photoPatchSchema = photoPatchFields
   .refine((patch) => patch.caption !== undefined || patch.kind !== undefined, "Change the caption or the kind.");
 export type PhotoPatch = z.infer<typeof photoPatchSchema>;
 
-/** `?kind=` on the gallery's list. */
-export const photoListQuerySchema = z.strictObject({ kind: photoKindSchema.optional() });
+/** `?kind=&cursor=&limit=` on the gallery's list (the cursor is the `nextCursor` of the page before). */
+export const photoListQuerySchema = z.strictObject({
+  kind: photoKindSchema.optional(),
+  cursor: z.string().regex(TIME_CURSOR_PATTERN, "Not a cursor from this list.").optional(),
+  limit: z.coerce.number().int().min(1).max(100).optional(),
+});

@@ -70,4 +70,10 @@ describe("timeline", () => {
     ]);
     expect(events[0]!.detail).toBe("Chafed");
   });
+
+  it("keeps the newest events only, and names a successor that is outside the window by its label", () => {
+    const parts = [{ id: "a", label: "Filter 1", installedOn: "2026-01-01", removedOn: "2026-03-01", removalReason: null, replacedById: "gone", replacedByLabel: "Filter 2" }];
+    const events = pressTimeline(new Date("2025-12-31T10:00:00Z"), parts, [], 2);
+    expect(events.map((e) => e.title)).toEqual(["Filter 1 replaced by Filter 2", "Filter 1 installed"]);
+  });
 });

@@ -18,16 +18,15 @@ import { can, canEditPress, inspectionAction } from "@/lib/auth/permissions";
 import { listComponents } from "@/lib/data/components";
 import { listDueForActor } from "@/lib/data/inspection-due";
 import { listPressInspections } from "@/lib/data/inspection-lists";
-import { verifyPressChain } from "@/lib/data/inspection-sign";
+import { pressChainStatus } from "@/lib/data/chain-status";
 import { listTemplates } from "@/lib/data/inspection-templates";
-import { listHourReadings } from "@/lib/data/press-edits";
+import { HISTORY_SHOWN, listRecentHistory } from "@/lib/data/press-history";
 import { listClearedTagOuts, listPressTagOuts } from "@/lib/data/press-tag-outs";
 import { SigningUnavailableError } from "@/lib/inspections/chain-key";
 import { CADENCE_LABELS } from "@/lib/inspections/labels";
 import { getPress } from "@/lib/data/presses";
 import { FRAME_TYPE_LABELS, LIFECYCLE_LABELS } from "@/lib/press-labels";
 import { evaluateAsBuilt } from "@/lib/press/as-built";
-import { pressTimeline } from "@/lib/press/timeline";
 import { ProblemForm } from "@/components/problems/problem-form";
 import { ProblemList } from "@/components/problems/problem-list";
 import { StatusBadge, StatusReasons } from "@/components/ui/status-badge";
@@ -44,9 +43,11 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
   const { user, shop } = await requireShopContext();
   const actor = { userId: user.id };
   const press = await orPageError(getPress(actor, pressId));
-  const [all, readings, status, problems, timeZone, tagOuts, cleared, due, recent, chain, templates] = await Promise.all([
-    listComponents(actor, pressId, { includeRemoved: true }),
-    listHourReadings(actor, pressId),
+  // Every list is a bounded window (newest first, with a way to the rest), so the page costs the
+  // same after years of use; the access checks of these calls share one lookup (memberPress).
+  const [installed, history, status, problems, timeZone, tagOuts, cleared, due, recent, chain, templates] = await Promise.all([
+    listComponents(actor, pressId),
+    listRecentHistory(actor, pressId, press.createdAt),
     getPressStatus(actor, pressId),
     listProblems(actor, pressId),
     getPressTimeZone(actor, pressId),
@@ -55,14 +56,13 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
     listDueForActor(actor, [pressId]),
     listPressInspections(actor, pressId, { limit: 5 }),
     // Without a chain key (misconfigured production) the page still shows, without the check.
-    verifyPressChain(actor, pressId).catch((error: unknown) => {
+    pressChainStatus(actor, pressId).catch((error: unknown) => {
       if (error instanceof SigningUnavailableError) return null;
       throw error;
     }),
     listTemplates(actor, press.shopId),
   ]);
   const startable = press.lifecycle === "retired" ? [] : templates.filter((t) => can(press.role, inspectionAction(t.signerRole, "perform")));
-  const installed = all.filter((c) => !c.removedOn);
   const units = user.unitSystem;
   const asBuilt = evaluateAsBuilt(press, installed, units);
   const failing = asBuilt.checks.filter((c) => c.level === "fail");
@@ -195,7 +195,13 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         <div id="components" className="lg:col-span-2">
           <Card title={`Parts (${installed.length})`}>
             <FreshSWR>
-              <ComponentTable pressId={pressId} initial={installed} units={units} currency={press.currency} canEdit={canEdit} />
+              <ComponentTable
+                pressId={pressId}
+                initial={installed.map(({ id, kind, label, spec, costCents, installedOn }) => ({ id, kind, label, spec, costCents, installedOn }))}
+                units={units}
+                currency={press.currency}
+                canEdit={canEdit}
+              />
             </FreshSWR>
           </Card>
         </div>
@@ -211,11 +217,20 @@ export default async function PressPage({ params }: { params: Promise<{ pressId:
         </Card>
         <div id="history">
           <Card title="History">
-            <PressTimeline events={pressTimeline(press.createdAt, all, readings)} />
+            <PressTimeline events={history} />
+            {history.length >= HISTORY_SHOWN ? (
+              <p className="mt-2 text-sm text-steel-600">
+                The latest {HISTORY_SHOWN} events. Every part, removed ones included:{" "}
+                <a className="text-oil-700 underline" href={`/api/presses/${pressId}/export?what=components`}>
+                  all components (CSV)
+                </a>
+                ; every service: the service log above.
+              </p>
+            ) : null}
           </Card>
         </div>
         <div id="photos" className="lg:col-span-2">
-          <PressPhotos pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} />
+          <PressPhotos pressId={pressId} userId={user.id} role={press.role} retired={press.lifecycle === "retired"} parts={installed.map((c) => ({ id: c.id, label: c.label }))} />
         </div>
         <div id="problems" className="lg:col-span-2">
           <Card title={`Problem reports (${problems.open.length} open)`}>
