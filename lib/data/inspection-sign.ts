@@ -129,20 +129,25 @@ export const MAX_NAMED_BROKEN = 100;
  */
 export async function verifyPressChain(actor: Actor, pressId: string): Promise<ChainReport & { brokenCount: number }> {
   await pressAccess(db, actor, pressId, "viewPress");
+  return verifyStoredChain(db, pressId);
+}
+
+/** The verifier itself, without authorization: for callers that already checked access (or own the database, like the scale seed). */
+export async function verifyStoredChain(executor: Executor, pressId: string): Promise<ChainReport & { brokenCount: number }> {
   const key = inspectionChainKey();
   const broken: ChainProblem[] = [];
   let brokenCount = 0;
   let checked = 0;
   let carry: StoredLink | null = null;
   for (let after = 0; ; ) {
-    const rows = await db
+    const rows = await executor
       .select()
       .from(inspections)
       .where(and(eq(inspections.pressId, pressId), isNotNull(inspections.chainSeq), gt(inspections.chainSeq, after)))
       .orderBy(asc(inspections.chainSeq))
       .limit(VERIFY_BATCH);
     if (rows.length === 0) break;
-    const answers = await db
+    const answers = await executor
       .select({ inspectionId: inspectionAnswers.inspectionId, answerId: inspectionAnswers.id, itemKey: inspectionAnswers.itemKey, outcome: inspectionAnswers.outcome, note: inspectionAnswers.note, answeredBy: inspectionAnswers.answeredBy, answeredAt: inspectionAnswers.answeredAt })
       .from(inspectionAnswers)
       .where(inArray(inspectionAnswers.inspectionId, rows.map((r) => r.id)))
