@@ -4,7 +4,7 @@ import { prerenderedScriptHashes } from "@/lib/csp/prerendered-pages";
 
 // Signed-in areas; a request without any session cookie goes straight to sign-in. This is a
 // convenience, never the gate: every page and route validates the session itself.
-const SIGNED_IN_PREFIXES = ["/dashboard", "/presses", "/inspections", "/bookings", "/shop", "/account"];
+const SIGNED_IN_PREFIXES = ["/dashboard", "/presses", "/inspections", "/bookings", "/shop", "/account", "/bench"];
 
 export function proxy(request: NextRequest): NextResponse {
   const { pathname, search } = request.nextUrl;

@@ -15,11 +15,10 @@ import { createServer, type Server } from "node:http";
 import type { AddressInfo } from "node:net";
 import { join } from "node:path";
 import { fileURLToPath } from "node:url";
-import { gzipSync } from "node:zlib";
+import { firstLoadJs, FIRST_LOAD_TARGET_KB as TARGET_KB, kB } from "./bench/first-load";
 
 const root = fileURLToPath(new URL("..", import.meta.url));
 const PAGE = "/sizing";
-const TARGET_KB = 200;
 
 async function startServer(): Promise<{ base: string; server?: Server }> {
   if (process.env.BENCH_BASE_URL) return { base: process.env.BENCH_BASE_URL.replace(/\/$/, "") };
@@ -38,43 +37,13 @@ async function startServer(): Promise<{ base: string; server?: Server }> {
   return { base: `http://127.0.0.1:${(server.address() as AddressInfo).port}`, server };
 }
 
-interface Chunk {
-  url: string;
-  noModule: boolean;
-  gzipBytes: number;
-}
-
-async function gzipSize(url: string): Promise<number> {
-  const res = await fetch(url);
-  if (!res.ok) throw new Error(`${url}: HTTP ${res.status}`);
-  return gzipSync(Buffer.from(await res.arrayBuffer()), { level: 9 }).length;
-}
-
-function referencedChunks(html: string): Map<string, boolean> {
-  const chunks = new Map<string, boolean>(); // url → noModule
-  for (const tag of html.match(/<script[^>]*\ssrc="[^"]+"[^>]*>/g) ?? []) {
-    const src = /\ssrc="([^"]+)"/.exec(tag)?.[1];
-    if (src) chunks.set(src, /\snoModule/i.test(tag));
-  }
-  // Client components' chunks are also named inside the inline flight data (escaped or not).
-  for (const match of html.matchAll(/\/_next\/static\/chunks\/[\w./-]+?\.js/g)) {
-    if (!chunks.has(match[0])) chunks.set(match[0], false);
-  }
-  return chunks;
-}
-
-const kB = (bytes: number): string => `${(bytes / 1000).toFixed(1)} kB`;
-
 const { base, server } = await startServer();
 try {
   const res = await fetch(base + PAGE);
   const html = await res.text();
   if (!res.ok) throw new Error(`${PAGE}: HTTP ${res.status}`);
-  const chunks: Chunk[] = [];
-  for (const [url, noModule] of referencedChunks(html)) chunks.push({ url, noModule, gzipBytes: await gzipSize(base + url) });
-  chunks.sort((a, b) => b.gzipBytes - a.gzipBytes);
+  const { chunks, totalGzipBytes: total } = await firstLoadJs(base, html);
   const counted = chunks.filter((c) => !c.noModule);
-  const total = counted.reduce((sum, c) => sum + c.gzipBytes, 0);
 
   console.log(`first-load JS of ${PAGE} (gzip -9, ${counted.length} chunks from ${base})`);
   for (const c of chunks) console.log(`  ${kB(c.gzipBytes).padStart(9)}  ${c.url}${c.noModule ? "  (noModule polyfills, not counted)" : ""}`);

@@ -6,6 +6,7 @@
 #   bash scripts/db.sh status       exit 0 if running, 1 if not
 #   bash scripts/db.sh sql [db] ... mariadb client as admin over the project socket
 #   bash scripts/db.sh reset-test   drop and recreate presswright_test
+#   bash scripts/db.sh reset-scale  drop and recreate presswright_scale (npm run seed:scale)
 #
 # Environment: DB_PORT (default 3407), DB_APP_PASSWORD, DB_MIGRATE_PASSWORD,
 # DB_START_TIMEOUT (seconds, default 60), DB_DATA_DIR (default <project>/.data: another
@@ -39,6 +40,7 @@ usage: bash scripts/db.sh <command>
   status       print whether the server is running (exit 0 running, 1 not)
   sql [db] ... open a mariadb client as the admin user over the project socket
   reset-test   drop and recreate the presswright_test database
+  reset-scale  drop and recreate the presswright_scale database (scale data)
 EOF
 }
 
@@ -244,7 +246,7 @@ provision() {
     # skip-name-resolve ignores with a warning on every start; it grants nothing.
     echo "DELETE FROM mysql.proxies_priv WHERE User IN ('root', $(sql_string "$DB_ADMIN_USER")) AND Host = @@hostname AND Host <> 'localhost';"
     echo "FLUSH PRIVILEGES;"
-    for db in "$DB_NAME" "$DB_TEST_NAME"; do
+    for db in "$DB_NAME" "$DB_TEST_NAME" "$DB_SCALE_NAME"; do
       echo "CREATE DATABASE IF NOT EXISTS \`$db\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;"
     done
     # Both hosts: with skip-name-resolve, TCP clients match '127.0.0.1' and
@@ -258,7 +260,7 @@ provision() {
       echo "CREATE USER IF NOT EXISTS '$DB_MIGRATE_USER'@'$host' IDENTIFIED BY $migrate_pw;"
       echo "ALTER USER '$DB_MIGRATE_USER'@'$host' IDENTIFIED BY $migrate_pw;"
       echo "REVOKE ALL PRIVILEGES, GRANT OPTION FROM '$DB_MIGRATE_USER'@'$host';"
-      for db in "$DB_NAME" "$DB_TEST_NAME"; do
+      for db in "$DB_NAME" "$DB_TEST_NAME" "$DB_SCALE_NAME" "$DB_SCALE_TEST_NAME"; do
         echo "GRANT $APP_PRIVILEGES ON \`$db\`.* TO '$DB_APP_USER'@'$host';"
         # ALL at database level includes CREATE/DROP/ALTER, INDEX,
         # REFERENCES, TRIGGER, CREATE ROUTINE, etc. — what migrations need.
@@ -298,7 +300,7 @@ cmd_start() {
   if [[ -n "$port" && "$port" != "$DB_PORT" ]]; then
     note "warning: the running server listens on port $port, not DB_PORT=$DB_PORT. Run 'bash scripts/db.sh stop' and start again to change it."
   fi
-  note "ready: MariaDB on 127.0.0.1:${port:-$DB_PORT} (socket $DB_SOCKET), databases: $DB_NAME, $DB_TEST_NAME"
+  note "ready: MariaDB on 127.0.0.1:${port:-$DB_PORT} (socket $DB_SOCKET), databases: $DB_NAME, $DB_TEST_NAME, $DB_SCALE_NAME"
 }
 
 cmd_stop() {
@@ -361,14 +363,17 @@ cmd_sql() {
     --default-character-set=utf8mb4 "${args[@]}" "$@"
 }
 
-cmd_reset_test() {
+# Database-level grants live in mysql.db and survive DROP DATABASE.
+reset_database() {
   require_running
-  # Database-level grants live in mysql.db and survive DROP DATABASE.
-  db_client --batch -e "DROP DATABASE IF EXISTS \`$DB_TEST_NAME\`;
-    CREATE DATABASE \`$DB_TEST_NAME\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;" \
-    || die "could not reset $DB_TEST_NAME."
-  note "reset $DB_TEST_NAME"
+  db_client --batch -e "DROP DATABASE IF EXISTS \`$1\`;
+    CREATE DATABASE \`$1\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;" \
+    || die "could not reset $1."
+  note "reset $1"
 }
+
+cmd_reset_test() { reset_database "$DB_TEST_NAME"; }
+cmd_reset_scale() { reset_database "$DB_SCALE_NAME"; }
 
 main() {
   local cmd="${1:-}"
@@ -379,6 +384,7 @@ main() {
     status) cmd_status "$@" ;;
     sql) cmd_sql "$@" ;;
     reset-test) cmd_reset_test "$@" ;;
+    reset-scale) cmd_reset_scale "$@" ;;
     -h | --help | help) usage ;;
     "") usage; exit 2 ;;
     *) printf 'db: unknown command: %s\n' "$cmd" >&2; usage; exit 2 ;;

@@ -7,10 +7,12 @@
 // so no route can be made to buffer hundreds of megabytes. Routes still apply their own, smaller
 // limits (lib/http.ts readJsonBody). A path with a malformed percent-escape is answered 400
 // (Next.js would answer 500). Both guards live in scripts/lib/request-guards.mjs.
+// PRESSWRIGHT_QUERY_COUNT (benchmark only) counts SQL queries per request: scripts/lib/query-count.mjs.
 import { createServer } from "node:http";
 import { fileURLToPath } from "node:url";
 import mysql from "mysql2/promise";
 import next from "next";
+import { countQueriesPerRequest } from "./lib/query-count.mjs";
 import { capRequestBody, refuseMalformedPath } from "./lib/request-guards.mjs";
 
 const dir = fileURLToPath(new URL("..", import.meta.url));
@@ -38,10 +40,10 @@ const app = next({ dev: false, dir, hostname, port });
 await app.prepare();
 const handle = app.getRequestHandler();
 
-const server = createServer((req, res) => {
+const server = createServer(countQueriesPerRequest((req, res) => {
   req.headers["x-presswright-client-ip"] = req.socket.remoteAddress ?? "unknown";
   if (refuseMalformedPath(req, res) && capRequestBody(req, res, maxBodyBytes)) handle(req, res);
-});
+}));
 server.on("error", (error) => {
   console.error(error.code === "EADDRINUSE" ? `Port ${port} is already in use; stop the other server or set PORT.` : error);
   process.exit(1);

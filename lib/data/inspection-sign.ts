@@ -134,7 +134,8 @@ export async function verifyPressChain(actor: Actor, pressId: string): Promise<C
 
 /**
  * The verifier itself, without authorization, against any copy of the schema — the restore drill
- * runs it on a restored database. Callers on behalf of a user go through verifyPressChain.
+ * runs it on a restored database, the scale seed on what it wrote. Callers on behalf of a user go
+ * through verifyPressChain.
  */
 export async function verifyChainIn(executor: Executor, pressId: string): Promise<ChainReport & { brokenCount: number }> {
   const key = inspectionChainKey();

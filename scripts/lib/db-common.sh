@@ -24,6 +24,9 @@ DB_PORT="${DB_PORT:-3407}"
 
 DB_NAME="presswright"
 DB_TEST_NAME="presswright_test"
+# Scale data (npm run seed:scale / npm run bench) and the scale seed's own integration test.
+DB_SCALE_NAME="presswright_scale"
+DB_SCALE_TEST_NAME="presswright_scale_test"
 
 # mariadbd lives in /usr/sbin on Debian, which is not on a non-root PATH.
 PATH="$PATH:/usr/local/sbin:/usr/sbin:/sbin"
