@@ -53,6 +53,8 @@ async function check(page: Page, where: string, prepare: (page: Page) => Promise
 
 const visit = (url: string) => async (page: Page) => {
   await page.goto(url);
+  // A page may redirect after it streams (a signed inspection's run page → its record): settle first.
+  await page.waitForLoadState("networkidle");
   await openDisclosures(page);
 };
 

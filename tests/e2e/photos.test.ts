@@ -29,6 +29,7 @@ async function expectLoaded(page: Page, image: Locator): Promise<void> {
 }
 
 describe("photos", () => {
+  // Upload, two views, link expiry and an axe run at two widths: more than the default minute on a busy machine.
   it("a manager attaches a GPS-tagged photo to a press, sees its thumbnail, and another shop gets 404", async () => {
     const caption = `Gusset weld, left upright ${Date.now().toString(36)}`;
     const { context, page } = await newPage(browser);
@@ -95,7 +96,7 @@ describe("photos", () => {
     expect([404, 410]).toContain((await page.request.get(photo.url)).status());
     expect((await page.request.get(`/api/photos/${photo.id}`)).status()).toBe(404);
     await context.close();
-  });
+  }, 150_000);
 
   it("tells the uploader at once when a file is not a photo it can take", async () => {
     const { context, page } = await newPage(browser, 390, 844);
