@@ -64,6 +64,8 @@ export function targets(ids: DatasetIds): Target[] {
     page("sizing", "Sizing page (public)", "/sizing", "public"),
     page("sign-in", "Sign-in page (public)", "/sign-in", "public"),
     page("press-status", "Public press status page /status/{token}", `/status/${ids.statusToken}`, "public"),
+    // What a prerendered page serves on this machine: the yardstick for the public pages' target.
+    page("not-found", "Prerendered 404 page (reference)", "/no-such-page", "public"),
   ];
 }
 
