@@ -7,7 +7,8 @@ import { newId } from "../../lib/ids";
 import { FULL_SIZING_INPUT } from "../../tests/fixtures/sizing-inputs";
 
 export type Kind = "floor" | "signed-in page" | "json" | "public";
-export type Target = { key: string; label: string; method: "GET" | "POST"; path: string; body?: string; signedIn: boolean; kind: Kind };
+/** `expectedStatus`: a target whose right answer is not 2xx (the 404 page); only other answers count as errors. */
+export type Target = { key: string; label: string; method: "GET" | "POST"; path: string; body?: string; signedIn: boolean; kind: Kind; expectedStatus?: number };
 
 /** Ids a dataset's targets need: the signed-in user's shop, its press with the longest history, an ordinary one. */
 export type DatasetIds = { heavyPressId: string; ordinaryPressId: string; statusToken: string; segments: Record<string, string> };
@@ -64,6 +65,8 @@ export function targets(ids: DatasetIds): Target[] {
     page("sizing", "Sizing page (public)", "/sizing", "public"),
     page("sign-in", "Sign-in page (public)", "/sign-in", "public"),
     page("press-status", "Public press status page /status/{token}", `/status/${ids.statusToken}`, "public"),
+    // What a prerendered page serves on this machine: the yardstick for the public pages' target.
+    { ...page("not-found", "Prerendered 404 page (reference)", "/no-such-page", "public"), expectedStatus: 404 },
   ];
 }
 

@@ -143,10 +143,19 @@ function pressPlan(config: ScaleConfig, p: number) {
   };
 }
 
+function shopStream(seed: number, shopIndex: number): Stream {
+  return new Stream((seed * 1_000_003 + shopIndex * 7_919) | 0);
+}
+
+/** A shop's id is the first value of its stream, so another shop can refer to it. */
+function shopIdOf(seed: number, shopIndex: number): string {
+  return shopStream(seed, shopIndex).id();
+}
+
 /** Every row of shop `shopIndex` (0-based). */
 export function generateShop(ctx: ShopContext, shopIndex: number): ShopRows {
   const { config, anchor } = ctx;
-  const s = new Stream((ctx.seed * 1_000_003 + shopIndex * 7_919) | 0);
+  const s = shopStream(ctx.seed, shopIndex);
   const rows = Object.fromEntries(TABLE_ORDER.map((t) => [t, [] as Row[]])) as ShopRows;
   const now = anchor.getTime();
   const historyStart = now - HISTORY_DAYS * DAY_MS;
@@ -159,6 +168,8 @@ export function generateShop(ctx: ShopContext, shopIndex: number): ShopRows {
     rows.users.push({ id: person.id, email: scaleEmail(shopIndex, person.role), display_name: person.name, password_hash: ctx.passwordHash, unit_system: "metric", active_shop_id: shopId, created_at: new Date(historyStart) });
     rows.memberships.push({ shop_id: shopId, user_id: person.id, role: person.role.startsWith("member") ? "member" : person.role, created_at: new Date(historyStart) });
   }
+  // Each manager is also a member of the next shop, so the shell's shop switcher has a choice.
+  if (config.shops > 1) rows.memberships.push({ shop_id: shopIdOf(ctx.seed, (shopIndex + 1) % config.shops), user_id: people[0]!.id, role: "member", created_at: new Date(historyStart) });
   const [manager, inspector, ...members] = people as [(typeof people)[0], (typeof people)[0], ...(typeof people)[0][]];
   const signers = [manager, inspector, inspector];
 

@@ -65,6 +65,16 @@ describe("scale data generator", () => {
     expect(chainLink(ctx(7).chainKey, canonical, GENESIS_LINK)).toBe(first.chain_hash);
   });
 
+  it("makes each manager a member of the next shop too, so the shop switcher has a choice", () => {
+    const two = { ...ctx(7), config: { ...CONFIG, shops: 2, presses: 4 } };
+    const [first, second] = [generateShop(two, 0), generateShop(two, 1)];
+    const manager = first.users[0]!.id;
+    expect([...first.memberships, ...second.memberships].filter((m) => m.user_id === manager).map((m) => [m.shop_id, m.role])).toEqual([
+      [first.shops[0]!.id, "manager"],
+      [second.shops[0]!.id, "member"],
+    ]);
+  });
+
   it("keeps each press's hour meter monotonic and spreads totals evenly", () => {
     let last = new Map<unknown, number>();
     for (const r of rowsOf(all(7), "hour_meter_readings")) {
