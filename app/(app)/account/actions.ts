@@ -1,6 +1,5 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
 import { z } from "zod";
 import type { ActionState } from "@/lib/action-state";
 import { assertSameOriginAction, setSessionCookie } from "@/lib/auth/action-guard";
@@ -9,6 +8,7 @@ import { formatWait } from "@/lib/auth/throttle-policy";
 import { changePassword, updateUnitSystem } from "@/lib/data/users";
 import { changePasswordSchema } from "@/lib/validation/auth";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
+import { revalidateSignedInPages } from "@/lib/revalidate";
 
 export async function changePasswordAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
@@ -33,5 +33,5 @@ export async function updateUnitsAction(form: FormData): Promise<void> {
   const { user } = await requireSignedIn();
   const units = z.enum(["metric", "imperial"]).safeParse(form.get("unitSystem"));
   if (units.success) await updateUnitSystem({ userId: user.id }, units.data);
-  revalidatePath("/", "layout");
+  revalidateSignedInPages();
 }

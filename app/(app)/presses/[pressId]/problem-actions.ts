@@ -8,6 +8,7 @@ import { assertSameOriginAction } from "@/lib/auth/action-guard";
 import { requireShopContext } from "@/lib/auth/current";
 import { closeProblem, reportProblem } from "@/lib/data/problems";
 import { problemCloseSchema, problemInputSchema } from "@/lib/validation/shop-use";
+import { revalidateSignedInPages } from "@/lib/revalidate";
 
 /** Reports a problem; "stop use" tags the press out at once. Any member of the shop. */
 export async function reportProblemAction(pressId: string, _prev: ActionState, form: FormData): Promise<ActionState> {
@@ -22,7 +23,7 @@ export async function reportProblemAction(pressId: string, _prev: ActionState, f
   } catch (error) {
     return refusalState(error, values);
   }
-  revalidatePath("/", "layout");
+  revalidateSignedInPages();
   // The new report's id lets the form offer a photo upload for it.
   const message = parsed.data.stopUse ? "Reported. The press is tagged out and the managers have been told." : "Reported. Thank you.";
   return { ok: true, message, values: { problemId: id } };

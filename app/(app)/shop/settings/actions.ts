@@ -9,6 +9,7 @@ import { ForbiddenError, NotFoundError } from "@/lib/auth/permissions";
 import { changeMemberRole, LastManagerError, removeMember, updateOpeningHours, updateShop } from "@/lib/data/shops";
 import { memberRoleSchema, openingHoursFromForm, shopSettingsSchema } from "@/lib/validation/shop";
 import { fieldErrorsOf } from "@/lib/validation/field-errors";
+import { revalidateSignedInPages } from "@/lib/revalidate";
 
 export async function updateShopAction(_prev: ActionState, form: FormData): Promise<ActionState> {
   await assertSameOriginAction();
@@ -22,7 +23,7 @@ export async function updateShopAction(_prev: ActionState, form: FormData): Prom
     if (error instanceof ForbiddenError) return { ok: false, message: "Only a manager can change shop settings.", values };
     throw error;
   }
-  revalidatePath("/", "layout");
+  revalidateSignedInPages();
   return { ok: true, message: "Shop settings saved.", values };
 }
 
