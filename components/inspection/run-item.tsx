@@ -2,7 +2,7 @@
 
 import { useEffect, useId, useState } from "react";
 import type { Outcome, TemplateItem } from "@/db/schema/inspections";
-import { PhotoUploader } from "@/components/photos/photo-uploader";
+import { PhotoUploader } from "@/components/photos/lazy-photo-uploader";
 import { MAX_NOTE_LENGTH } from "@/lib/validation/inspection";
 import { OUTCOME_LABELS } from "@/lib/inspections/labels";
 import type { Answer } from "./use-answer-sync";

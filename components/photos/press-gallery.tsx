@@ -6,7 +6,7 @@ import useSWRInfinite from "swr/infinite";
 import { fetchJson } from "@/lib/fetch-json";
 import { PHOTO_KIND_LABELS, PHOTO_KIND_OPTIONS, type PhotoKind } from "@/lib/photos/kinds";
 import { pressPhotosUrl, type PhotoItem } from "./photo-api";
-import { PhotoUploader, type PartOption } from "./photo-uploader";
+import { PhotoUploader, type PartOption } from "./lazy-photo-uploader";
 import { PhotoViewer } from "./photo-viewer";
 
 export type GalleryPage = { photos: PhotoItem[]; nextCursor: string | null; counts?: Partial<Record<PhotoKind, number>> };

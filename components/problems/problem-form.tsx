@@ -1,7 +1,7 @@
 "use client";
 
 import { useActionState } from "react";
-import { PhotoUploader } from "@/components/photos/photo-uploader";
+import { PhotoUploader } from "@/components/photos/lazy-photo-uploader";
 import { Button } from "@/components/ui/button";
 import { FieldError } from "@/components/ui/field";
 import { FormMessage } from "@/components/ui/form-message";

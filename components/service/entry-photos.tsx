@@ -2,7 +2,7 @@
 
 import Image from "next/image";
 import { useRouter } from "next/navigation";
-import { PhotoUploader } from "@/components/photos/photo-uploader";
+import { PhotoUploader } from "@/components/photos/lazy-photo-uploader";
 import { PHOTO_KIND_LABELS } from "@/lib/photos/kinds";
 
 type Photo = { id: string; url: string; thumbUrl: string; thumbWidth: number; thumbHeight: number; caption: string | null; kind: keyof typeof PHOTO_KIND_LABELS };

@@ -15,6 +15,7 @@ async function run(base: string, cookie: string, target: Target, options: { conn
     duration: options.seconds,
     ...(options.rate ? { overallRate: options.rate } : {}),
     timeout: 30,
+    idReplacement: target.manyClients === true,
   });
   const responses = result.requests.total;
   // autocannon counts by class: for a target that should answer 4xx, those answers are not errors.

@@ -86,7 +86,7 @@ export function markdown(machine: Machine, settings: Settings, rows: Row[], firs
       `| ${row.target.label} | \`${row.target.method} ${row.target.path}\` | ${l ? f1(l.c10.reqPerS) : "-"} | ${r === null ? "-" : r.toFixed(2)} | ${g.text} ${verdict(g.met)} | ${l ? ps(l.c1, ["p50", "p90", "p99"], " / ") : "-"} | ${l ? ps(l.c10, ["p50", "p90", "p99"], " / ") : "-"} | ${l ? `${ps(l.fixed, ["p50", "p99"], " / ")} (${f1(errorRate(l.fixed))} % err)` : "-"} | ${l ? `${f1(errorRate(l.c10))} % (${l.c10.non2xx} + ${l.c10.errors} of ${l.c10.requests})` : "-"} | ${l ? kb(l.c10.bytesPerResponse) : "-"} |`,
     );
   }
-  out.push("", "`POST /api/sizing` is limited to 120 requests a minute per address (lib/rate-limit.ts) and every load run comes from 127.0.0.1, so most of its answers under load are the 429 of that limit: its error rate is the limit working, and its req/s is that of the limited path.");
+  out.push("", "`POST /api/sizing` is limited to 120 requests a minute per address (lib/rate-limit.ts). Its load comes from a different `X-Forwarded-For` address on every request (the bench server trusts one proxy hop), so the figures are the whole path — the limiter's window write and the computation — as many visitors would meet it, not the limiter's refusals.");
   out.push("", "## SQL queries per request (demo data → scale data; target: equal)", "");
   out.push("Counted with `PRESSWRIGHT_QUERY_COUNT=1` (db/client.ts, scripts/lib/query-count.mjs), one request per page, the demo manager on the demo data and the shop-1 manager on the scale data.", "");
   out.push("| target | demo | scale | equal |", "|---|---:|---:|---|");

@@ -45,6 +45,8 @@ export async function startServer(databaseUrl: string, queryCount?: "1" | "sql")
     // Plain-HTTP loopback: the session cookie without Secure, as the browser tests do.
     INSECURE_COOKIES: "1",
     EMAIL_POLL_MS: "3600000",
+    // One trusted hop: targets marked manyClients send a different X-Forwarded-For per request.
+    TRUSTED_PROXY_HOPS: "1",
   };
   delete env.PRESSWRIGHT_QUERY_COUNT;
   if (queryCount) env.PRESSWRIGHT_QUERY_COUNT = queryCount;

@@ -7,8 +7,12 @@ import { newId } from "../../lib/ids";
 import { FULL_SIZING_INPUT } from "../../tests/fixtures/sizing-inputs";
 
 export type Kind = "floor" | "signed-in page" | "json" | "public";
-/** `expectedStatus`: a target whose right answer is not 2xx (the 404 page); only other answers count as errors. */
-export type Target = { key: string; label: string; method: "GET" | "POST"; path: string; body?: string; signedIn: boolean; kind: Kind; expectedStatus?: number };
+/**
+ * `expectedStatus`: a target whose right answer is not 2xx (the 404 page); only other answers count as errors.
+ * `manyClients`: every request comes from another address (X-Forwarded-For through the bench server's one
+ * trusted proxy hop), so a per-address limit measures its bookkeeping, not its refusals.
+ */
+export type Target = { key: string; label: string; method: "GET" | "POST"; path: string; body?: string; signedIn: boolean; kind: Kind; expectedStatus?: number; manyClients?: boolean };
 
 /** Ids a dataset's targets need: the signed-in user's shop, its press with the longest history, an ordinary one. */
 export type DatasetIds = { heavyPressId: string; ordinaryPressId: string; statusToken: string; segments: Record<string, string> };
@@ -60,7 +64,7 @@ export function targets(ids: DatasetIds): Target[] {
     { key: "service-log", label: "Service log, a page of entries (press with the longest history)", method: "GET", path: `/api/presses/${ids.heavyPressId}/service-log?limit=25`, signedIn: true, kind: "signed-in page" },
     page("status", "Shop status (press list with each press's status)", "/presses"),
     page("bookings", "Bookings list", "/bookings"),
-    { key: "sizing-api", label: "POST /api/sizing", method: "POST", path: "/api/sizing", body: JSON.stringify(FULL_SIZING_INPUT), signedIn: false, kind: "json" },
+    { key: "sizing-api", label: "POST /api/sizing", method: "POST", path: "/api/sizing", body: JSON.stringify(FULL_SIZING_INPUT), signedIn: false, kind: "json", manyClients: true },
     page("landing", "Landing page (public)", "/", "public"),
     page("sizing", "Sizing page (public)", "/sizing", "public"),
     page("sign-in", "Sign-in page (public)", "/sign-in", "public"),
@@ -84,5 +88,7 @@ export function requestHeaders(target: Target, base: string, cookie: string): Re
     ...(target.signedIn ? { cookie } : {}),
     ...(target.method === "POST" ? { "content-type": "application/json", origin: base } : {}),
     "accept-encoding": "identity",
+    // autocannon's idReplacement puts a fresh id in place of [<id>] on every request.
+    ...(target.manyClients ? { "x-forwarded-for": "bench-client-[<id>]" } : {}),
   };
 }
