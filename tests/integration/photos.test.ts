@@ -126,6 +126,7 @@ describe("who may upload", () => {
       body: JSON.stringify({ status: "uploaded", file: {}, origin: "http://evil.example", metadata: { userId: ctx.outsider.userId } }),
     });
     expect(forged.status).toBe(400);
-    expect(await forged.json()).toEqual({ message: "Invalid signature" });
+    // Every API refusal carries `error`; the SDK's own `message` stays for its client.
+    expect(await forged.json()).toEqual({ error: "Invalid signature", message: "Invalid signature" });
   });
 });
