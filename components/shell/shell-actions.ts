@@ -1,11 +1,11 @@
 "use server";
 
-import { revalidatePath } from "next/cache";
 import { notFound, redirect } from "next/navigation";
 import { assertSameOriginAction, clearSessionCookie } from "@/lib/auth/action-guard";
 import { getCurrentSession, requireSignedIn } from "@/lib/auth/current";
 import { NotFoundError } from "@/lib/auth/permissions";
 import { invalidateSession } from "@/lib/auth/session";
+import { revalidateSignedInPages } from "@/lib/revalidate";
 import { recordAudit } from "@/lib/data/audit";
 import { switchActiveShop } from "@/lib/data/shops";
 
@@ -32,6 +32,6 @@ export async function switchShopAction(form: FormData): Promise<void> {
     if (error instanceof NotFoundError) notFound();
     throw error;
   }
-  revalidatePath("/", "layout");
+  revalidateSignedInPages();
   redirect("/dashboard");
 }

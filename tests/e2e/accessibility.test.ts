@@ -93,7 +93,7 @@ describe("accessibility of interactive states", () => {
         const first = page.locator("[data-testid^='item-']").first();
         const fail = first.getByRole("button", { name: "Fail", exact: true });
         if ((await fail.getAttribute("aria-pressed")) !== "true") await fail.click();
-        await first.getByRole("textbox").waitFor();
+        await first.getByRole("textbox", { name: /^What is wrong/ }).waitFor();
       });
     } finally {
       // Leave the shared database as it was: this run was only opened to be looked at.

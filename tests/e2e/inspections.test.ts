@@ -32,9 +32,11 @@ async function startFromPress(page: Page, pressName: string, checklist: string):
 }
 
 const item = (page: Page, key: string) => page.getByTestId(`item-${key}`);
-async function answer(page: Page, key: string, outcome: "Pass" | "Fail" | "N/A", note?: string): Promise<void> {
+/** The item's note (online, the photo picker beside it has a caption box too). */
+const note = (page: Page, key: string) => item(page, key).getByRole("textbox", { name: /^(What is wrong|Note)/ });
+async function answer(page: Page, key: string, outcome: "Pass" | "Fail" | "N/A", text?: string): Promise<void> {
   await item(page, key).getByRole("button", { name: outcome, exact: true }).click();
-  if (note) await item(page, key).getByRole("textbox").fill(note);
+  if (text) await note(page, key).fill(text);
 }
 /** Waits until nothing is queued in the browser (every "not yet sent" mark gone). */
 async function allSaved(page: Page): Promise<void> {
@@ -124,7 +126,7 @@ describe("inspections", () => {
     await page.reload();
     await expect.poll(() => page.getByTestId("sync-state").textContent()).toContain("3 answers not yet sent");
     expect(await page.getByTestId("unsent").count()).toBe(3);
-    expect(await item(page, "bolts").getByRole("textbox").inputValue()).toBe("One nut loose on the rear left tie rod");
+    expect(await note(page, "bolts").inputValue()).toBe("One nut loose on the rear left tie rod");
     // The answer the server took before the signal went is shown too, though the offline copy predates it.
     expect(await item(page, "relief").getByRole("button", { name: "Pass", exact: true }).getAttribute("aria-pressed")).toBe("true");
     await expect.poll(() => page.getByText("4 of 8 answered").count()).toBe(1);

@@ -87,15 +87,15 @@ describe("the public header and sign-in on prerendered pages", () => {
     await page.getByRole("navigation", { name: "Public" }).getByRole("link", { name: "Sign in" }).waitFor();
     await signInVia(page, "/sign-in?next=%2Fsizing");
     await page.waitForURL("**/sizing");
-    await page.locator('summary[aria-label="Account menu"]:visible').waitFor();
+    await page.locator("summary:visible", { hasText: "Account menu" }).waitFor();
     expect((await page.getByTestId("active-shop").first().textContent())?.length).toBeGreaterThan(0);
     expect(await page.getByRole("navigation", { name: "Public" }).count()).toBe(0);
 
-    await page.locator('summary[aria-label="Account menu"]:visible').click();
+    await page.locator("summary:visible", { hasText: "Account menu" }).click();
     await page.getByRole("button", { name: "Sign out" }).click();
     await page.waitForURL("**/sign-in");
     await page.getByRole("navigation", { name: "Public" }).waitFor();
-    expect(await page.locator('summary[aria-label="Account menu"]').count()).toBe(0);
+    expect(await page.locator("summary", { hasText: "Account menu" }).count()).toBe(0);
     await context.close();
   });
 
