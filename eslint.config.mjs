@@ -11,5 +11,5 @@ export default defineConfig([
       "@typescript-eslint/no-unused-vars": ["error", { argsIgnorePattern: "^_", varsIgnorePattern: "^_" }],
     },
   },
-  globalIgnores([".next/**", ".next-test/**", ".next-h3/**", ".next-h5/**", "out/**", "build/**", "next-env.d.ts", ".data/**", "node_modules/**", "db/migrations/**"]),
+  globalIgnores([".next/**", ".next-*/**", "out/**", "build/**", "next-env.d.ts", ".data/**", "node_modules/**", "db/migrations/**"]),
 ]);

@@ -7,7 +7,7 @@
  * current browsers never download them. The chart library is loaded after first paint, so it
  * appears here only as a separate line. Prints figures; asserts nothing. Target ≤ 200 kB.
  *
- *   NEXT_DIST_DIR=.next-h3 npx tsx scripts/bench-first-load.ts     (after `next build` into that folder)
+ *   NEXT_DIST_DIR=.next-bench npx tsx scripts/bench-first-load.ts     (after `next build` into that folder)
  *   BENCH_BASE_URL=http://127.0.0.1:3000 npx tsx scripts/bench-first-load.ts   (a server already running)
  */
 import { existsSync } from "node:fs";
